@@ -3,9 +3,16 @@
  * layer needs (gcd, small constants, conversions). Native `bigint` is not used:
  * the project card asks for JSBI wherever it can serve.
  */
-import JSBI from 'jsbi';
+import JSBIModule from 'jsbi';
 
-export type Int = JSBI;
+/**
+ * jsbi ships `module.exports = JSBI` with a declaration file saying `export default`;
+ * under NodeNext the default import is therefore typed as the module while at run
+ * time it is the class itself. This cast restores the run-time truth once, here.
+ */
+type JSBIClass = typeof JSBIModule.default;
+export const JSBI = JSBIModule as unknown as JSBIClass;
+export type Int = import('jsbi').default;
 export const ZERO: Int = JSBI.BigInt(0);
 export const ONE: Int = JSBI.BigInt(1);
 export const MINUS_ONE: Int = JSBI.BigInt(-1);
@@ -92,4 +99,11 @@ export function lcmNumber(a: number, b: number): number {
   return l;
 }
 
-export { JSBI };
+
+/** ⌊√n⌋ for a safe integer n ≥ 0, corrected after the floating-point estimate. */
+export function isqrt(n: number): number {
+  let r = Math.floor(Math.sqrt(n));
+  while (r * r > n) r--;
+  while ((r + 1) * (r + 1) <= n) r++;
+  return r;
+}

@@ -1,0 +1,62 @@
+/**
+ * Product with a sparse factor (a theta or eta leaf has O(√N) terms up to q^N):
+ * each term c·q^i·ζ^e of the sparse factor adds c times the dense factor, shifted,
+ * into the result — shifted row additions, no work on the sparse factor's zeros.
+ */
+import { JSBI, type Int, ZERO, isZero } from './integer.js';
+import { type QZSeries, makeSeries } from './qz-series.js';
+import { type Slice, EMPTY_SLICE, sliceIsZero, sliceHi, trimSlice } from './slice.js';
+import { planProduct } from './product-plan.js';
+
+interface SparseTerm {
+  readonly i: number;
+  readonly e: number;
+  readonly c: Int;
+}
+
+function sparseTerms(s: QZSeries, count: number): SparseTerm[] {
+  const out: SparseTerm[] = [];
+  for (let i = 0; i < Math.min(count, s.slices.length); i++) {
+    const sl = s.slices[i]!;
+    for (let k = 0; k < sl.c.length; k++) if (!isZero(sl.c[k]!)) out.push({ i, e: sl.lo + k, c: sl.c[k]! });
+  }
+  return out;
+}
+
+/** `sparse · dense`; the product is commutative, the roles only steer the loops. */
+export function mulSparseDense(sparse: QZSeries, dense: QZSeries): QZSeries {
+  const { a, b, start, qDen, exactTo, count } = planProduct(sparse, dense);
+  const terms = sparseTerms(a, count);
+  const lo = new Array<number>(count).fill(Infinity);
+  const hi = new Array<number>(count).fill(-Infinity);
+  for (const t of terms) {
+    for (let j = 0; j < b.slices.length && t.i + j < count; j++) {
+      const bj = b.slices[j]!;
+      if (sliceIsZero(bj)) continue;
+      lo[t.i + j] = Math.min(lo[t.i + j]!, bj.lo + t.e);
+      hi[t.i + j] = Math.max(hi[t.i + j]!, sliceHi(bj) + t.e);
+    }
+  }
+  const acc: Int[][] = lo.map((l, k) => (l === Infinity ? [] : new Array<Int>(hi[k]! - l + 1).fill(ZERO)));
+  for (const t of terms) {
+    for (let j = 0; j < b.slices.length && t.i + j < count; j++) {
+      const bj = b.slices[j]!;
+      if (sliceIsZero(bj)) continue;
+      const row = acc[t.i + j]!;
+      const off = bj.lo + t.e - lo[t.i + j]!;
+      for (let k = 0; k < bj.c.length; k++) {
+        const v = bj.c[k]!;
+        if (!isZero(v)) row[off + k] = JSBI.add(row[off + k]!, JSBI.multiply(t.c, v));
+      }
+    }
+  }
+  const slices: Slice[] = acc.map((c, k) => (c.length === 0 ? EMPTY_SLICE : trimSlice(lo[k]!, c)));
+  return makeSeries(start, qDen, JSBI.multiply(a.den, b.den), slices, exactTo, a.nvars);
+}
+
+/** Number of non-zero numerators among the first `count` slices. */
+export function nonZeroTerms(s: QZSeries, count = s.slices.length): number {
+  let n = 0;
+  for (let i = 0; i < Math.min(count, s.slices.length); i++) for (const v of s.slices[i]!.c) if (!isZero(v)) n++;
+  return n;
+}

@@ -1,0 +1,116 @@
+/**
+ * J.C.P. Miller's recurrence for h = f^k, f = Σ a_n t^n with a_0 invertible
+ * (t one q-step; the a_n are Laurent polynomials in ζ and a_0 must be a monomial):
+ *   n·a_0·h_n = Σ_{j=1..n} ((k+1)·j − n)·a_j·h_{n−j}
+ * (Knuth, TAOCP vol. 2, §4.7, eq. (9); it follows from f·h′ = k·f′·h). Works for
+ * every integer k, negative ones included, so it also inverts units. Sparse f (a
+ * pentagonal sum) makes each step cost O(#terms of f).
+ *
+ * Fast path: integer numerators, den = 1, a_0 = ±ζ^e; then h has integer
+ * coefficients and the division by n is exact (asserted). Otherwise the recurrence
+ * runs over rationals.
+ */
+import { JSBI, type Int, ONE, ZERO, int, isZero, lcm } from './integer.js';
+import { type Rational, rational, radd, rmul, rdiv, rpow, rat, rIsZero } from './rational.js';
+import { type QZSeries, makeSeries, sliceCountTo, leadingExponent } from './qz-series.js';
+import { type Slice, EMPTY_SLICE, sliceIsZero, sliceMultiply, sliceCombine, trimSlice } from './slice.js';
+import { rsub } from './rational.js';
+import { shiftSeries } from './shift.js';
+
+/** Whether the lowest non-zero slice is a single monomial (required for Miller). */
+export function hasMonomialLead(f: QZSeries): boolean {
+  const v = leadingExponent(f);
+  if (v === null) return false;
+  const i = f.slices.findIndex((s) => !sliceIsZero(s));
+  return f.slices[i]!.c.length === 1;
+}
+
+/** f^k for an integer k by Miller's recurrence; f must have a monomial lowest slice. */
+export function powerMiller(f: QZSeries, k: number): QZSeries {
+  const v = leadingExponent(f);
+  if (v === null || !hasMonomialLead(f)) throw new RangeError('internal: Miller recurrence needs a monomial leading slice');
+  const lead = f.slices.findIndex((s) => !sliceIsZero(s));
+  // g = f / q^v has a_0 as its slice 0; f^k = q^(kv) · g^k, and g^k is exact as far as g is.
+  const a = f.slices.slice(lead);
+  const X = rsub(f.exactTo, v);
+  const n = sliceCountTo(rat(0), f.qDen, X);
+  const a0 = a[0]!;
+  const fast = JSBI.equal(f.den, ONE) && (JSBI.equal(a0.c[0]!, ONE) || JSBI.equal(a0.c[0]!, int(-1)));
+  const h = fast ? millerIntegral(a, a0, k, n) : millerRational(a, f.den, k, n);
+  return shiftSeries(makeSeries(rat(0), f.qDen, h.den, h.slices, X, f.nvars), rmul(v, rat(k)));
+}
+
+interface Numerators {
+  readonly den: Int;
+  readonly slices: Slice[];
+}
+
+function millerIntegral(a: readonly Slice[], a0: Slice, k: number, n: number): Numerators {
+  const sgn = JSBI.equal(a0.c[0]!, ONE) ? 1 : -1;
+  const e0 = a0.lo;
+  const h: Slice[] = new Array<Slice>(n).fill(EMPTY_SLICE);
+  if (n === 0) return { den: ONE, slices: h };
+  h[0] = { lo: e0 * k, c: [sgn === 1 || k % 2 === 0 ? ONE : int(-1)] };
+  const support: number[] = [];
+  for (let j = 1; j < Math.min(n, a.length); j++) if (!sliceIsZero(a[j]!)) support.push(j);
+  for (let m = 1; m < n; m++) {
+    let acc: Slice = EMPTY_SLICE;
+    for (const j of support) {
+      if (j > m) break;
+      const w = (k + 1) * j - m;
+      if (w === 0 || sliceIsZero(h[m - j]!)) continue;
+      acc = sliceCombine(acc, null, sliceMultiply(a[j]!, h[m - j]!), int(w));
+    }
+    const divisor = int(m * sgn);
+    const c = acc.c.map((x) => {
+      const qt = JSBI.divide(x, divisor);
+      if (!JSBI.equal(JSBI.multiply(qt, divisor), x)) throw new RangeError('internal: inexact Miller step');
+      return qt;
+    });
+    h[m] = trimSlice(acc.lo - e0, c);
+  }
+  return { den: ONE, slices: h };
+}
+
+/** The same recurrence with rational coefficients (rare: non-monic or non-integral f). */
+function millerRational(a: readonly Slice[], den: Int, k: number, n: number): Numerators {
+  const toR = (s: Slice): Map<number, Rational> => {
+    const m = new Map<number, Rational>();
+    s.c.forEach((x, i) => {
+      if (!isZero(x)) m.set(s.lo + i, rational(x, den));
+    });
+    return m;
+  };
+  const ar = a.slice(0, n).map(toR);
+  const [[e0, c0]] = [...ar[0]!.entries()] as [number, Rational][];
+  const h: Map<number, Rational>[] = [];
+  if (n > 0) h.push(new Map([[e0 * k, rpow(c0, k)]]));
+  for (let m = 1; m < n; m++) {
+    const acc = new Map<number, Rational>();
+    for (let j = 1; j <= m && j < ar.length; j++) {
+      const w = (k + 1) * j - m;
+      if (w === 0) continue;
+      for (const [e1, x] of ar[j]!) {
+        for (const [e2, y] of h[m - j]!) {
+          const e = e1 + e2;
+          acc.set(e, radd(acc.get(e) ?? rat(0), rmul(rat(w), rmul(x, y))));
+        }
+      }
+    }
+    const hm = new Map<number, Rational>();
+    const scale = rmul(rat(m), c0);
+    for (const [e, x] of acc) if (!rIsZero(x)) hm.set(e - e0, rdiv(x, scale));
+    h.push(hm);
+  }
+  let common: Int = ONE;
+  for (const m of h) for (const x of m.values()) common = lcm(common, x.den);
+  const slices = h.map((m) => {
+    if (m.size === 0) return EMPTY_SLICE;
+    const keys = [...m.keys()];
+    const lo = Math.min(...keys);
+    const c: Int[] = new Array<Int>(Math.max(...keys) - lo + 1).fill(ZERO);
+    for (const [e, x] of m) c[e - lo] = JSBI.multiply(x.num, JSBI.divide(common, x.den));
+    return trimSlice(lo, c);
+  });
+  return { den: common, slices };
+}

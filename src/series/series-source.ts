@@ -1,0 +1,109 @@
+/**
+ * Precision planning. A `SeriesSource` is a series that can be expanded to any
+ * q-order on demand, with a lower bound for its valuation known in advance. The
+ * combinators below ask each input for exactly the order the output needs:
+ * - a product to order X needs factor i to X − Σ_{j≠i} v_j (v_j lower bounds);
+ * - f^k needs f to X − (k−1)·v(f) (Miller's recurrence, or k−1 multiplications);
+ * - F/T (exact slice division, T of known valuation v_T) needs F to X + v_T and T
+ *   to X + v_T − v(F/T).
+ * Asking for more recomputes from the sources; nothing is ever padded with zeros.
+ */
+import { type Rational, radd, rsub, rmul, rmin, rat, rcmp } from './rational.js';
+import { type QZSeries, truncateSeries } from './qz-series.js';
+import { multiplySeries } from './multiply.js';
+import { powerSeries } from './power.js';
+import { linearCombination } from './add.js';
+import { divideExact } from './divide-exact.js';
+
+export interface SeriesSource {
+  /** A lower bound of the valuation; exact where the source says so. */
+  readonly valuation: Rational;
+  /** The series to q-order X (exact to at least X; callers truncate). */
+  expand(X: Rational): QZSeries;
+}
+
+/** Wraps a builder `X ↦ series to X`. */
+export function source(valuation: Rational, build: (X: Rational) => QZSeries): SeriesSource {
+  return { valuation, expand: (X) => build(X) };
+}
+
+/** Memoises the highest expansion made so far; smaller orders are truncations of it. */
+export function cached(s: SeriesSource): SeriesSource {
+  let best: QZSeries | null = null;
+  return {
+    valuation: s.valuation,
+    expand(X: Rational): QZSeries {
+      if (best === null || rcmp(best.exactTo, X) < 0) best = s.expand(X);
+      return rcmp(best.exactTo, X) === 0 ? best : truncateSeries(best, X);
+    },
+  };
+}
+
+export function productSource(factors: readonly SeriesSource[]): SeriesSource {
+  let v = rat(0);
+  for (const f of factors) v = radd(v, f.valuation);
+  return {
+    valuation: v,
+    expand(X: Rational): QZSeries {
+      let acc: QZSeries | null = null;
+      for (const f of factors) {
+        const part = f.expand(radd(X, rsub(f.valuation, v)));
+        acc = acc === null ? part : multiplySeries(acc, part);
+      }
+      return truncateSeries(acc!, X);
+    },
+  };
+}
+
+export function powerSource(base: SeriesSource, k: number): SeriesSource {
+  const v = rmul(base.valuation, rat(k));
+  return {
+    valuation: v,
+    expand(X: Rational): QZSeries {
+      const need = rsub(X, rmul(base.valuation, rat(k - 1)));
+      return truncateSeries(powerSeries(base.expand(need), k), X);
+    },
+  };
+}
+
+export interface WeightedSource {
+  readonly source: SeriesSource;
+  readonly coefficient: Rational;
+}
+
+export function sumSource(terms: readonly WeightedSource[]): SeriesSource {
+  let v = terms[0]!.source.valuation;
+  for (const t of terms) v = rmin(v, t.source.valuation);
+  return {
+    valuation: v,
+    expand(X: Rational): QZSeries {
+      return linearCombination(terms.map((t) => ({ series: t.source.expand(X), coefficient: t.coefficient })));
+    },
+  };
+}
+
+/** Applies a map that preserves q-orders (D_q, D_ζ, ζ ↦ ζ^a, scaling). */
+export function mapSource(s: SeriesSource, f: (x: QZSeries) => QZSeries, valuation = s.valuation): SeriesSource {
+  return { valuation, expand: (X) => f(s.expand(X)) };
+}
+
+/**
+ * F/T by exact slice division; `divisorValuation` must be T's exact valuation.
+ * `onFailure` turns a non-exact division (a pole) into the caller's error.
+ */
+export function quotientSource(
+  F: SeriesSource,
+  T: SeriesSource,
+  divisorValuation: Rational,
+  onFailure: () => never,
+): SeriesSource {
+  const vG = rsub(F.valuation, divisorValuation);
+  return {
+    valuation: vG,
+    expand(X: Rational): QZSeries {
+      const g = divideExact(F.expand(radd(X, divisorValuation)), T.expand(radd(rsub(X, vG), divisorValuation)));
+      if (g === null) onFailure();
+      return truncateSeries(g, X);
+    },
+  };
+}
