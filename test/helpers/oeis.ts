@@ -5,6 +5,7 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { dirname, resolve } from 'node:path';
+import { JSBI, type Int } from '../../src/series/index.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 export const OEIS_DIR = resolve(here, '../../../shared/reference/oeis');
@@ -32,4 +33,9 @@ export function oeisTerm(seq: OeisSequence, n: number): string {
   const t = seq.terms[n - seq.offset];
   if (t === undefined) throw new RangeError(`${seq.id} has no term ${n}`);
   return t;
+}
+
+/** All terms of a sequence as JSBI integers (offset ignored: index i is the i-th listed term). */
+export function oeisIntegers(id: string): Int[] {
+  return readOeis(id).terms.map((t) => JSBI.BigInt(t));
 }
