@@ -9,8 +9,10 @@ import { multiplySeries } from './multiply.js';
 import { hasMonomialLead, powerMiller } from './power-miller.js';
 import { nonZeroTerms } from './mul-sparse-dense.js';
 
-/** Sparse bases with at most this many terms are multiplied in one at a time. */
+/** Sparse bases with at most this many terms are multiplied in one at a time… */
 export const SPARSE_BASE_TERMS = 400;
+/** …for exponents up to this one; beyond it binary powering needs far fewer products. */
+export const SPARSE_BASE_MAX_EXPONENT = 16;
 
 export function powerSeries(f: QZSeries, k: number): QZSeries {
   if (!Number.isSafeInteger(k)) throw new RangeError('exponent too large');
@@ -18,7 +20,7 @@ export function powerSeries(f: QZSeries, k: number): QZSeries {
   if (k === 1) return f;
   if (hasMonomialLead(f)) return powerMiller(f, k);
   if (k < 0) throw new RangeError('internal: negative power of a series without a unit leading term');
-  if (nonZeroTerms(f) <= SPARSE_BASE_TERMS) {
+  if (k <= SPARSE_BASE_MAX_EXPONENT && nonZeroTerms(f) <= SPARSE_BASE_TERMS) {
     let acc = f;
     for (let i = 1; i < k; i++) acc = multiplySeries(f, acc);
     return acc;

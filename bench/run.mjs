@@ -1,0 +1,152 @@
+#!/usr/bin/env node
+/**
+ * Benchmarks of the exact series engine (`npm run bench` builds first, then runs this
+ * file against ../dist). Never run by `npm test`.
+ *
+ *   node bench/run.mjs [W1 W2 …] [--quick]
+ *   node bench/run.mjs --single W1        (one run; prints {workload, ms, sum, wsum})
+ *
+ * For every selected workload (default: all, see workloads.mjs) each run builds fresh
+ * sources and expands from scratch:
+ *   bestMs   — best of 5 in-process runs (performance.now around the expansion only);
+ *   medianMs — median of 5 child processes `--single`, each timing one cold run itself.
+ * Checksums (checksum.mjs) of every run must agree, or the bench fails.
+ * Writes bench/results.md and bench/results.json (only the workloads run).
+ * `--quick`: one in-process run each, no child processes, no files written (smoke run).
+ */
+import { spawnSync } from 'node:child_process';
+import { writeFileSync, renameSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { rat, radd, rcmp, req, sliceExponent } from '../dist/series/index.js';
+import { WORKLOADS, workloadByName } from './workloads.mjs';
+import { seriesChecksum } from './checksum.mjs';
+
+const RUNS = 5;
+const SELF = fileURLToPath(import.meta.url);
+const RESULTS_MD = new URL('./results.md', import.meta.url);
+const RESULTS_JSON = new URL('./results.json', import.meta.url);
+
+function parseArgs(argv) {
+  const opts = { quick: false, single: null, names: [] };
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === '--quick') opts.quick = true;
+    else if (a === '--single') {
+      opts.single = argv[++i];
+      if (opts.single === undefined) throw new Error('--single needs a workload name');
+    } else if (a.startsWith('--')) throw new Error(`unknown option ${a}`);
+    else opts.names.push(a);
+  }
+  return opts;
+}
+
+/** Times one fresh expansion and checks it is the series asked for. */
+function runOnce(w) {
+  const t0 = performance.now();
+  const series = w.build();
+  const ms = performance.now() - t0;
+  const { sum, wsum, leadIndex } = seriesChecksum(series);
+  const want = radd(w.lead, rat(w.steps));
+  if (!req(series.exactTo, want)) throw new Error(`${w.name}: expanded to the wrong q-order`);
+  if (leadIndex < 0 || rcmp(sliceExponent(series, leadIndex), w.lead) !== 0) {
+    throw new Error(`${w.name}: leading q-power is not the expected one`);
+  }
+  return { ms, sum, wsum };
+}
+
+function runChild(name) {
+  const r = spawnSync(process.execPath, [SELF, '--single', name], { encoding: 'utf8', maxBuffer: 1 << 20 });
+  if (r.status !== 0) throw new Error(`child --single ${name} failed (${r.status ?? r.signal}):\n${r.stderr}`);
+  const lines = r.stdout.trim().split('\n');
+  return JSON.parse(lines[lines.length - 1]);
+}
+
+function median(xs) {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 === 1 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+function sameChecksums(w, a, b, where) {
+  if (a.sum !== b.sum || a.wsum !== b.wsum) {
+    throw new Error(`${w.name}: checksums differ between runs (${where}): ${JSON.stringify(a)} vs ${JSON.stringify(b)}`);
+  }
+}
+
+function benchWorkload(w, quick) {
+  const runs = [];
+  for (let i = 0; i < (quick ? 1 : RUNS); i++) {
+    runs.push(runOnce(w));
+    sameChecksums(w, runs[0], runs[i], 'in-process');
+  }
+  const bestMs = Math.min(...runs.map((r) => r.ms));
+  let medianMs = null;
+  if (!quick) {
+    const child = [];
+    for (let i = 0; i < RUNS; i++) {
+      const c = runChild(w.name);
+      sameChecksums(w, runs[0], c, 'child process');
+      child.push(c.ms);
+    }
+    medianMs = median(child);
+  }
+  return { workload: w.name, bestMs: round(bestMs), medianMs: medianMs === null ? null : round(medianMs), sum: runs[0].sum, wsum: runs[0].wsum };
+}
+
+function round(ms) {
+  return Math.round(ms * 10) / 10;
+}
+
+function markdown(results, totalMs) {
+  const lines = [
+    '# Benchmark results',
+    '',
+    `Node ${process.version}, ${process.platform}/${process.arch}; ${new Date().toISOString()}; whole bench ${(totalMs / 1000).toFixed(1)} s.`,
+    `bestMs: best of ${RUNS} in-process runs; medianMs: median of ${RUNS} child processes (one cold run each).`,
+    'Checksums are residues mod 2^61 − 1 (bench/checksum.mjs).',
+    '',
+    '| workload | series | bestMs | medianMs | sum | wsum |',
+    '|---|---|---:|---:|---:|---:|',
+  ];
+  for (const r of results) {
+    const w = workloadByName(r.workload);
+    lines.push(`| ${r.workload} | ${w.title} | ${r.bestMs.toFixed(1)} | ${r.medianMs === null ? '—' : r.medianMs.toFixed(1)} | ${r.sum} | ${r.wsum} |`);
+  }
+  return lines.join('\n') + '\n';
+}
+
+/** Writes via a temporary name and a rename, so a killed bench leaves no half file. */
+function writeAtomic(url, text) {
+  const path = fileURLToPath(url);
+  writeFileSync(path + '.tmp', text);
+  renameSync(path + '.tmp', path);
+}
+
+function main() {
+  const opts = parseArgs(process.argv.slice(2));
+  if (opts.single !== null) {
+    const w = workloadByName(opts.single);
+    const r = runOnce(w);
+    process.stdout.write(JSON.stringify({ workload: w.name, ms: r.ms, sum: r.sum, wsum: r.wsum }) + '\n');
+    return;
+  }
+  const selected = opts.names.length === 0 ? WORKLOADS : opts.names.map(workloadByName);
+  const t0 = performance.now();
+  const results = [];
+  for (const w of selected) {
+    const r = benchWorkload(w, opts.quick);
+    results.push(r);
+    console.log(`${r.workload}: best ${r.bestMs} ms, median (child) ${r.medianMs ?? '—'} ms, sum ${r.sum}, wsum ${r.wsum}`);
+  }
+  const totalMs = performance.now() - t0;
+  const md = markdown(results, totalMs);
+  if (opts.quick) {
+    console.log(`\n${md}\n(--quick: results files not written)`);
+    return;
+  }
+  writeAtomic(RESULTS_JSON, JSON.stringify(results, null, 2) + '\n');
+  writeAtomic(RESULTS_MD, md);
+  console.log(`\n${md}`);
+}
+
+main();

@@ -1,0 +1,59 @@
+/**
+ * The benchmark workloads. Each `build()` constructs fresh sources (so no cache is
+ * shared between runs) and expands to the requested q-order; `lead` is the leading
+ * q-power and `steps` the number of integer q-steps past it, so the series is asked
+ * for to q-order lead + steps.
+ */
+import { rat, radd, powerSource, productSource } from '../dist/series/index.js';
+import { thetaSource, etaPowerSource } from '../dist/forms/leaves.js';
+import { phiMinus2Source } from '../dist/forms/phi-m2-1.js';
+import { phi0Source } from '../dist/forms/phi-0-1.js';
+
+function expandSteps(src, lead, steps) {
+  return src.expand(radd(lead, rat(steps)));
+}
+
+export const WORKLOADS = [
+  {
+    name: 'W1',
+    title: 'Π(1−qⁿ)^24 to q^20000 (η^24 = q·Π(1−qⁿ)^24, 20000 steps past q^1)',
+    lead: rat(1),
+    steps: 20000,
+    build() {
+      return expandSteps(etaPowerSource(24), this.lead, this.steps);
+    },
+  },
+  {
+    name: 'W2',
+    title: 'ϑ(z)³ϑ(2z)³ϑ(3z)²ϑ(4z)ϑ(5z)/η⁶, 60 steps past q^1',
+    lead: rat(1),
+    steps: 60,
+    build() {
+      const src = productSource([
+        powerSource(thetaSource(1), 3),
+        powerSource(thetaSource(2), 3),
+        powerSource(thetaSource(3), 2),
+        thetaSource(4),
+        thetaSource(5),
+        etaPowerSource(-6),
+      ]);
+      return expandSteps(src, this.lead, this.steps);
+    },
+  },
+  {
+    name: 'W3',
+    title: '(φ_{−2,1}·φ_{0,1})^6 to q^40',
+    lead: rat(0),
+    steps: 40,
+    build() {
+      const src = powerSource(productSource([phiMinus2Source(), phi0Source()]), 6);
+      return expandSteps(src, this.lead, this.steps);
+    },
+  },
+];
+
+export function workloadByName(name) {
+  const w = WORKLOADS.find((x) => x.name === name);
+  if (w === undefined) throw new Error(`unknown workload ${name} (known: ${WORKLOADS.map((x) => x.name).join(', ')})`);
+  return w;
+}
