@@ -1,0 +1,2 @@
+/** Bounds from types (MATH.md §6). */
+export { theoremABound } from './theorem-a.js';

@@ -1,0 +1,28 @@
+/**
+ * The evaluator's catalogue of diagnostics (codes SC-E…), same shape as the front
+ * end's (`lang/diagnostic-codes.ts`). Codes are stable.
+ */
+import type { DiagnosticTemplate } from '../lang/diagnostic.js';
+
+function error(code: string, template: string): DiagnosticTemplate {
+  return { code, severity: 'error', template };
+}
+
+export const evalCodes = {
+  divisionByZero: error('SC-E001', 'division by zero: {what} is identically zero'),
+  divisorNotShownNonZero: error(
+    'SC-E002',
+    'cannot show that the divisor {what} is non-zero: its coefficients vanish as far as they were computed (q^{order})',
+  ),
+  illTypedSum: error('SC-E003', 'the terms of this sum have different types: {left} has {leftType}, {right} has {rightType} ({differences})'),
+  notYetSupported: error('SC-E004', '{what} is not supported yet'),
+  tooManyTerms: error(
+    'SC-E005',
+    'the expansion would need about {estimate} coefficients, more than --max-terms {limit}; ask for a lower q-order or raise --max-terms',
+  ),
+  exponentTooLarge: error('SC-E006', 'the exponent {exponent} is too large'),
+  zeroToNegativePower: error('SC-E007', 'zero raised to a negative power'),
+  meromorphicInput: error('SC-E008', '{what} of a meromorphic expression is not supported yet (its denominator is {denominator})'),
+  poleFound: error('SC-E009', '{what} has a pole: {detail}'),
+  internal: error('SC-E999', 'internal error: {detail}; please report it with the claim text'),
+} as const;

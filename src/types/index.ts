@@ -1,0 +1,4 @@
+/** Modular types and their inference rules (MATH.md §3). */
+export * from './modular-type.js';
+export * from './building-blocks.js';
+export * from './divisor-rule.js';
