@@ -46,9 +46,10 @@ export function expansionHeader(expression: string, e: Expansion): string[] {
 export function expansionText(expression: string, e: Expansion): string {
   const rows: [string, string][] = [];
   const s = e.series;
-  for (let i = 0; i < s.slices.length; i++) rows.push([powerText('q', sliceExponent(s, i)), sliceText(e, i)]);
+  for (let i = 0; i < s.slices.length; i++) rows.push([powerText('q', sliceExponent(s, i), false), sliceText(e, i)]);
   // Leading zero slices before the first non-zero one carry no information.
-  while (rows.length > 1 && rows[0]![1] === '0') rows.shift();
+  while (rows.length > 0 && rows[0]![1] === '0') rows.shift();
+  if (rows.length === 0) return [...expansionHeader(expression, e), '', `0  (every coefficient up to q^${rationalToString(e.qOrder)} vanishes)`].join('\n') + '\n';
   const width = Math.max(0, ...rows.map((r) => r[0].length));
   return [...expansionHeader(expression, e), '', ...rows.map(([q, t]) => `${q.padEnd(width)}  ${t}`)].join('\n') + '\n';
 }

@@ -5,9 +5,9 @@
  */
 import { type Rational, rationalToString, rIsInteger, rcmp, rat } from '../series/index.js';
 
-export function powerText(base: string, e: Rational): string {
+export function powerText(base: string, e: Rational, omitOne = true): string {
   const s = rationalToString(e);
-  if (rIsInteger(e) && rcmp(e, rat(0)) >= 0) return e.num.toString() === '1' ? base : `${base}^${s}`;
+  if (rIsInteger(e) && rcmp(e, rat(0)) >= 0) return omitOne && s === '1' ? base : `${base}^${s}`;
   return `${base}^(${s})`;
 }
 

@@ -124,10 +124,14 @@ export function leadingExponent(s: QZSeries): Rational | null {
 
 /**
  * A lower bound for the valuation that is exact when the series is non-zero within
- * its q-order; for a series known only to vanish up to X, the next grid point.
+ * its q-order; for a series known only to vanish up to X, the next grid point (or
+ * `start`, when the series was built knowing that nothing lies below it).
  */
 export function valuationBound(s: QZSeries): Rational {
-  return leadingExponent(s) ?? radd(s.exactTo, rat(1, s.qDen));
+  const lead = leadingExponent(s);
+  if (lead !== null) return lead;
+  const next = radd(s.exactTo, rat(1, s.qDen));
+  return rcmp(s.start, next) > 0 ? s.start : next;
 }
 
 /** The same series known only to q-order X ≤ exactTo. */

@@ -9,7 +9,7 @@
  * Asking for more recomputes from the sources; nothing is ever padded with zeros.
  */
 import { type Rational, radd, rsub, rmul, rmin, rat, rcmp } from './rational.js';
-import { type QZSeries, truncateSeries } from './qz-series.js';
+import { type QZSeries, truncateSeries, zeroSeries } from './qz-series.js';
 import { multiplySeries } from './multiply.js';
 import { powerSeries } from './power.js';
 import { linearCombination } from './add.js';
@@ -45,6 +45,7 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
   return {
     valuation: v,
     expand(X: Rational): QZSeries {
+      if (rcmp(X, v) < 0) return zeroSeries(X, v);
       let acc: QZSeries | null = null;
       for (const f of factors) {
         const part = f.expand(radd(X, rsub(f.valuation, v)));
@@ -60,6 +61,7 @@ export function powerSource(base: SeriesSource, k: number): SeriesSource {
   return {
     valuation: v,
     expand(X: Rational): QZSeries {
+      if (k > 0 && rcmp(X, v) < 0) return zeroSeries(X, v);
       const need = rsub(X, rmul(base.valuation, rat(k - 1)));
       return truncateSeries(powerSeries(base.expand(need), k), X);
     },
