@@ -24,5 +24,11 @@ export const evalCodes = {
   zeroToNegativePower: error('SC-E007', 'zero raised to a negative power'),
   meromorphicInput: error('SC-E008', '{what} of a meromorphic expression is not supported yet (its denominator is {denominator})'),
   poleFound: error('SC-E009', '{what} has a pole: {detail}'),
+  failedDefinition: error('SC-E010', "'{name}' could not be evaluated: {reason}"),
+  assumeNotQuasi: error('SC-E011', "assume {name}: '{name}' has a proven type already (class {cls}); assume is only for quasi-modular definitions"),
+  assumeTypeMismatch: error('SC-E012', 'assume {name}: the rules give {inferred}, not {declared} ({differences})'),
+  inconsistentType: error('SC-E013', 'the type {type} is not consistent: 2k ≡ D (mod 2) fails (MATH.md §3)'),
+  assumeMeromorphic: error('SC-E014', "assume {name}: the definition has the divisor {denominator}; assume needs a holomorphic one"),
+  duplicateClaim: error('SC-E015', "a claim named '{name}' already exists in this file (line {line})"),
   internal: error('SC-E999', 'internal error: {detail}; please report it with the claim text'),
 } as const;

@@ -38,6 +38,12 @@ export interface EvalContext {
   readonly text: string;
   readonly variables: readonly string[];
   readonly lets: Map<string, Monomial>;
+  /** Definitions whose evaluation failed, with the reason. */
+  readonly failedLets: Map<string, string>;
+  /** The `assume`d names each definition depends on. */
+  readonly letAssumptions: Map<string, ReadonlySet<string>>;
+  /** Filled while evaluating: the assumptions the value relies on. */
+  readonly usedAssumptions: Set<string>;
   /** Divisors already shown non-zero (by atom key). */
   readonly checkedDivisors: Set<string>;
   /** q-steps past a quasi divisor's nominal bound searched for a non-zero coefficient. */
@@ -45,7 +51,16 @@ export interface EvalContext {
 }
 
 export function newEvalContext(text: string, variables: readonly string[], depth = 10): EvalContext {
-  return { text, variables, lets: new Map(), checkedDivisors: new Set(), depth };
+  return {
+    text,
+    variables,
+    lets: new Map(),
+    failedLets: new Map(),
+    letAssumptions: new Map(),
+    usedAssumptions: new Set(),
+    checkedDivisors: new Set(),
+    depth,
+  };
 }
 
 function textOf(ctx: EvalContext, span: Span): string {
@@ -118,8 +133,11 @@ export function evaluate(e: Expr, ctx: EvalContext): Monomial {
     case 'latticeTheta':
       throw evalError(evalCodes.notYetSupported, { what: 'the lattice theta series Theta[…]' }, e.span);
     case 'ref': {
+      const failed = ctx.failedLets.get(e.name);
+      if (failed !== undefined) throw evalError(evalCodes.failedDefinition, { name: e.name, reason: failed }, e.span);
       const v = ctx.lets.get(e.name);
       if (v === undefined) throw evalError(evalCodes.internal, { detail: `unresolved name ${e.name}` }, e.span);
+      for (const a of ctx.letAssumptions.get(e.name) ?? []) ctx.usedAssumptions.add(a);
       return v;
     }
     case 'substitute':
@@ -175,12 +193,10 @@ function evaluateSubstitution(
   return checkDivisors(m, ctx, span);
 }
 
-/** Evaluates the `let` statements in order into ctx.lets; returns the first failure per let. */
-export function evaluateLet(s: Extract<Statement, { kind: 'let' }>, ctx: EvalContext): void {
+/** Evaluates the body of a `let` (one parameter at most, for now). */
+export function evaluateLetBody(s: Extract<Statement, { kind: 'let' }>, ctx: EvalContext): Monomial {
   if (s.params !== null && s.params.length > 1) {
     throw evalError(evalCodes.notYetSupported, { what: 'a definition with several parameters' }, s.span);
   }
-  const inner: EvalContext = s.params === null ? ctx : { ...ctx, variables: s.params };
-  ctx.lets.set(s.name, evaluate(s.body, inner));
+  return evaluate(s.body, s.params === null ? ctx : { ...ctx, variables: s.params });
 }
-

@@ -1,0 +1,190 @@
+/**
+ * A claim `L == R` (MATH.md §4, §6): normalise to F = 0, take the bound of Theorem A
+ * from F's type, expand both sides of F exactly to it and compare; then compare a
+ * margin beyond the bound, where any difference means a wrong type rule or a false
+ * assumption (an error, never a proof). Quasi-modular claims are compared to the
+ * nominal bound plus `depth` q-steps and are at best unproved.
+ */
+import { type Rational, rat, radd, rcmp, rmin, rationalToString, rToNumber, type QZSeries } from '../series/index.js';
+import type { Expr } from '../lang/ast.js';
+import { type ModularType, typesEqual, typeDifferences, scalarIndexOf, formatIndex, type FormClass } from '../types/index.js';
+import type { MismatchRecord, TypeRecord } from '../verdict/index.js';
+import type { Monomial, AtomPower } from './atom.js';
+import { evaluate, type EvalContext } from './evaluate.js';
+import { atomMonomial, monomialText, multiplyMonomials, powerMonomial, ONE_MONOMIAL, isZeroMonomial } from './monomial.js';
+import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
+import { numeratorSource } from './monomial-source.js';
+import { compareTo, type Mismatch } from './compare-series.js';
+import { isIdenticallyZero, boundOfType } from './side-zero.js';
+import { estimateTerms } from './estimate.js';
+import type { CheckOptions } from './check-options.js';
+import type { Outcome } from './outcome.js';
+import { evalCodes } from './diagnostic-codes.js';
+import { evalError } from './eval-error.js';
+import { typeRecord } from './type-record.js';
+
+interface NormalForm {
+  readonly left: Monomial;
+  readonly right: Monomial;
+  readonly leftBy: Monomial;
+  readonly rightBy: Monomial;
+  readonly crossMultiplied: boolean;
+}
+
+function product(powers: Iterable<AtomPower>): Monomial {
+  let m = ONE_MONOMIAL;
+  for (const p of powers) m = multiplyMonomials(m, powerMonomial(atomMonomial(p.atom), p.exponent));
+  return m;
+}
+
+/**
+ * F = N_L·Q_R′ − N_R·Q_L′ with Q′ the denominators after cancelling the factors they
+ * share (structurally identical atoms only, MATH.md §4 step 2).
+ */
+export function normalForm(l: Monomial, r: Monomial): NormalForm {
+  const ql = new Map(splitMonomial(l).denominator.map((p) => [p.atom.key, p]));
+  const qr = new Map(splitMonomial(r).denominator.map((p) => [p.atom.key, p]));
+  if (ql.size === 0 && qr.size === 0) return { left: l, right: r, leftBy: ONE_MONOMIAL, rightBy: ONE_MONOMIAL, crossMultiplied: false };
+  const qlAll = product(ql.values());
+  const qrAll = product(qr.values());
+  const common: AtomPower[] = [];
+  for (const [k, p] of ql) {
+    const o = qr.get(k);
+    if (o !== undefined) common.push({ atom: p.atom, exponent: Math.min(p.exponent, o.exponent) });
+  }
+  const shared = product(common);
+  const leftBy = multiplyMonomials(qrAll, powerMonomial(shared, -1));
+  const rightBy = multiplyMonomials(qlAll, powerMonomial(shared, -1));
+  return {
+    left: multiplyMonomials(l, multiplyMonomials(qlAll, leftBy)),
+    right: multiplyMonomials(r, multiplyMonomials(qrAll, rightBy)),
+    leftBy,
+    rightBy,
+    crossMultiplied: true,
+  };
+}
+
+function mismatchRecord(m: Mismatch): MismatchRecord {
+  return {
+    q: rationalToString(m.q),
+    zeta: [rationalToString(rat(m.zetaHalves, 2))],
+    left: rationalToString(m.left),
+    right: rationalToString(m.right),
+  };
+}
+
+function worstClass(a: FormClass, b: FormClass): FormClass {
+  if (a === 'quasi' || b === 'quasi') return 'quasi';
+  return a === 'meromorphic' || b === 'meromorphic' ? 'meromorphic' : 'modular';
+}
+
+export function boundDerivation(t: ModularType, X: Rational): string {
+  const m = scalarIndexOf(t);
+  const mText = rcmp(m, rat(0)) < 0 ? `max(${formatIndex(t.index)}, 0)` : formatIndex(t.index);
+  return `(K + 2m)/12 with K = ${rationalToString(t.weight)}, m = ${mText}: q-order ${rationalToString(X)} (Theorem A, MATH.md §6)`;
+}
+
+function expandBoth(nf: NormalForm, t: ModularType, X: Rational, opts: CheckOptions): [QZSeries, QZSeries] {
+  const ls = numeratorSource(nf.left);
+  const rs = numeratorSource(nf.right);
+  const v = rmin(ls.valuation, rs.valuation);
+  const estimate = estimateTerms(Math.max(0, rToNumber(scalarIndexOf(t))), v, X);
+  if (estimate > opts.maxTerms) {
+    throw evalError(evalCodes.tooManyTerms, { estimate: Math.ceil(estimate).toExponential(2), limit: opts.maxTerms }, null);
+  }
+  return [ls.expand(X), rs.expand(X)];
+}
+
+export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: CheckOptions): Outcome {
+  const nvars = ctx.variables.length;
+  const l = evaluate(left, ctx);
+  const r = evaluate(right, ctx);
+  const tl = monomialType(l, nvars);
+  const tr = monomialType(r, nvars);
+  const cl = monomialClass(l);
+  const cr = monomialClass(r);
+  const quasi = cl === 'quasi' || cr === 'quasi';
+  const cls = worstClass(cl, cr);
+  if (!quasi && tl !== null && tr !== null && !typesEqual(tl, tr)) {
+    return differentTypes(l, r, tl, tr, cl, cr, nvars);
+  }
+  const nf = normalForm(l, r);
+  const compared = nf.crossMultiplied ? 'cross-multiplied' : 'sides';
+  let tF = monomialType(nf.left, nvars) ?? monomialType(nf.right, nvars);
+  const claimType: TypeRecord = typeRecord(tl ?? tr, cls);
+  const normal = {
+    compared,
+    left: monomialText(nf.left),
+    right: monomialText(nf.right),
+    ...(nf.crossMultiplied ? { leftMultipliedBy: monomialText(nf.leftBy), rightMultipliedBy: monomialText(nf.rightBy) } : {}),
+    type: typeRecord(tF, quasi ? 'quasi' : 'modular'),
+  } as const;
+  if (tF === null || (isZeroMonomial(nf.left) && isZeroMonomial(nf.right))) {
+    return { verdict: 'proved', type: claimType, compared, normalForm: normal, reason: 'both sides are the literal 0' };
+  }
+  if (opts.adjustTypeForTest) tF = opts.adjustTypeForTest(tF);
+  const X = boundOfType(tF);
+  const derivation = boundDerivation(tF, X);
+  if (quasi) {
+    const to = radd(X, rat(opts.depth));
+    const [a, b] = expandBoth(nf, tF, to, opts);
+    const c = compareTo(a, b, to);
+    const reasons = [...new Set([...quasiReasons(l), ...quasiReasons(r)])].join('; ');
+    if (c.mismatch !== null) {
+      return { verdict: 'refuted', type: claimType, compared, normalForm: normal, mismatch: mismatchRecord(c.mismatch), reason: `the expansions differ (${reasons}; compared to the nominal bound plus ${opts.depth} q-steps)` };
+    }
+    return {
+      verdict: 'unproved',
+      type: claimType,
+      compared,
+      normalForm: normal,
+      reason: `no proven type: ${reasons}; the coefficients agree up to q^${rationalToString(to)} (${c.compared} compared; nominal bound q^${rationalToString(X)} plus ${opts.depth} q-steps)`,
+    };
+  }
+  const marginTo = radd(X, rat(opts.margin));
+  const [a, b] = expandBoth(nf, tF, marginTo, opts);
+  const c = compareTo(a, b, X);
+  if (c.mismatch !== null) {
+    return { verdict: 'refuted', type: claimType, compared, normalForm: normal, mismatch: mismatchRecord(c.mismatch), reason: 'a coefficient inside the bound differs' };
+  }
+  const margin = compareTo(a, b, marginTo);
+  if (margin.mismatch !== null) return marginFailure(ctx, margin.mismatch, marginTo);
+  return {
+    verdict: 'proved',
+    type: claimType,
+    compared,
+    normalForm: normal,
+    bound: { theorem: 'A', qOrder: rationalToString(X), coefficientsChecked: c.compared, derivation, marginTo: rationalToString(marginTo) },
+  };
+}
+
+function marginFailure(ctx: EvalContext, m: Mismatch, marginTo: Rational): Outcome {
+  const where = `q^${rationalToString(m.q)} ζ^${rationalToString(rat(m.zetaHalves, 2))}`;
+  if (ctx.usedAssumptions.size > 0) {
+    return {
+      verdict: 'error',
+      reason: `assumption ${[...ctx.usedAssumptions].join(', ')} is false: the sides agree inside the bound but differ at ${where}, inside the margin (to q^${rationalToString(marginTo)})`,
+      mismatch: mismatchRecord(m),
+    };
+  }
+  return {
+    verdict: 'error',
+    reason: `internal error: the sides agree inside the bound but differ at ${where}, inside the margin (to q^${rationalToString(marginTo)}); a type rule is wrong — please report this claim`,
+    mismatch: mismatchRecord(m),
+  };
+}
+
+function differentTypes(l: Monomial, r: Monomial, tl: ModularType, tr: ModularType, cl: FormClass, cr: FormClass, nvars: number): Outcome {
+  const zl = isIdenticallyZero(l, nvars);
+  const zr = isIdenticallyZero(r, nvars);
+  if (zl && zr) {
+    return { verdict: 'proved', type: typeRecord(tl, cl), reason: 'both sides vanish identically (each checked to its own bound)' };
+  }
+  return {
+    verdict: 'refuted',
+    type: typeRecord(tl, worstClass(cl, cr)),
+    leftType: typeRecord(tl, cl),
+    rightType: typeRecord(tr, cr),
+    reason: `the sides have different types (${typeDifferences(tl, tr).join('; ')}) and ${zl ? 'the right side is not' : zr ? 'the left side is not' : 'neither side is'} identically zero`,
+  };
+}

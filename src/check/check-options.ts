@@ -1,0 +1,18 @@
+/** Settings of a check run (CLAIMS.md options) and test-only hooks. */
+import type { ModularType } from '../types/index.js';
+
+export interface CheckOptions {
+  /** Refuse any expansion needing more coefficients (`--max-terms`). */
+  readonly maxTerms: number;
+  /** q-steps past the nominal bound compared for unproved claims (`--depth`). */
+  readonly depth: number;
+  /** q-steps past the bound compared after a proof (MATH.md §6: at least two). */
+  readonly margin: number;
+  /**
+   * Test-only: replaces the inferred type of F before the bound is taken, to show
+   * that a wrong type rule is caught by the margin check. Never set by the CLI.
+   */
+  readonly adjustTypeForTest?: (t: ModularType) => ModularType;
+}
+
+export const DEFAULT_CHECK_OPTIONS: CheckOptions = { maxTerms: 10_000_000, depth: 10, margin: 2 };

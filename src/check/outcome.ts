@@ -1,0 +1,7 @@
+/** The part of a verdict the checker decides (the rest — file, line, name, time — is added around it). */
+import type { Verdict } from '../verdict/index.js';
+
+export type Outcome = Pick<
+  Verdict,
+  'verdict' | 'type' | 'leftType' | 'rightType' | 'compared' | 'bound' | 'mismatch' | 'reason' | 'normalForm' | 'diagnostics'
+>;

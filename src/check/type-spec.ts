@@ -1,0 +1,36 @@
+/** A written TYPE (`jacobi(weight W, index I[, character eta^D]) [qualifier]`) as a ModularType. */
+import { parseRational, rat, rdiv, mod, type Rational } from '../series/index.js';
+import type { TypeSpec } from '../lang/ast.js';
+import { type ModularType, isConsistent, formatType } from '../types/index.js';
+import { evalCodes } from './diagnostic-codes.js';
+import { evalError } from './eval-error.js';
+
+function literal(text: string): Rational {
+  const r = parseRational(text);
+  if (r === undefined) throw evalError(evalCodes.internal, { detail: `bad rational literal ${text}` }, null);
+  return r;
+}
+
+export function typeFromSpec(spec: TypeSpec, nvars: number): ModularType {
+  const weight = literal(spec.weight);
+  let index: Rational[][];
+  switch (spec.index.kind) {
+    case 'scalar':
+      index = [[literal(spec.index.value)]];
+      break;
+    case 'matrix':
+      index = spec.index.matrix.rows.map((row) => row.map(literal));
+      break;
+    case 'latticeMatrix':
+      index = spec.index.gram.rows.map((row) => row.map((x) => rdiv(literal(x), rat(2))));
+      break;
+    case 'latticeName':
+      throw evalError(evalCodes.notYetSupported, { what: 'lattice indices' }, spec.index.span);
+  }
+  if (index.length !== nvars) {
+    throw evalError(evalCodes.notYetSupported, { what: `an index of size ${index.length} in a file with ${nvars} variable(s)` }, spec.span);
+  }
+  const t: ModularType = { weight, index, etaPower: mod(spec.character ?? 0, 24) };
+  if (!isConsistent(t)) throw evalError(evalCodes.inconsistentType, { type: formatType(t) }, spec.span);
+  return t;
+}

@@ -1,0 +1,2 @@
+/** Verdict and certificate data types. */
+export * from './verdict.js';
