@@ -3,3 +3,4 @@ export * from './modular-type.js';
 export * from './building-blocks.js';
 export * from './divisor-rule.js';
 export * from './holomorphy.js';
+export * from './theta-block-order.js';
