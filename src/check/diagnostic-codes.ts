@@ -30,5 +30,6 @@ export const evalCodes = {
   inconsistentType: error('SC-E013', 'the type {type} is not consistent: 2k ≡ D (mod 2) fails (MATH.md §3)'),
   assumeMeromorphic: error('SC-E014', "assume {name}: the definition has the divisor {denominator}; assume needs a holomorphic one"),
   duplicateClaim: error('SC-E015', "a claim named '{name}' already exists in this file (line {line})"),
+  operatorPrecondition: error('SC-E016', '{op} needs {condition}; its input has {type} (MATH.md §7)'),
   internal: error('SC-E999', 'internal error: {detail}; please report it with the claim text'),
 } as const;

@@ -20,6 +20,7 @@ import { splitMonomial } from './monomial-parts.js';
 import { sumMonomials } from './sum.js';
 import { substituteMonomial } from './substitute-monomial.js';
 import { derivativeMonomial } from './derivative-atom.js';
+import { serreMonomial, heatMonomial, taylorMonomial, bracketMonomial, heckeVMonomial, heckeTMonomial } from './operator-atom.js';
 import { assertDivisorNonZero } from './nonzero.js';
 import {
   ETA_ATOM,
@@ -142,16 +143,22 @@ export function evaluate(e: Expr, ctx: EvalContext): Monomial {
     }
     case 'substitute':
       return evaluateSubstitution(e.target, e.args, e.allZero, e.span, ctx);
-    case 'hecke':
-      if (e.op === 'U') return substituteMonomial(evaluate(e.arg, ctx), e.level, e.span);
-      throw evalError(evalCodes.notYetSupported, { what: `the Hecke operator ${e.op}_${e.level}` }, e.span);
-    case 'derivative':
-      if (e.op === 'Dq' || e.op === 'Dz') return derivativeMonomial(e.op, evaluate(e.arg, ctx), ctx.variables.length, e.span);
-      throw evalError(evalCodes.notYetSupported, { what: `the operator ${e.op}` }, e.span);
+    case 'hecke': {
+      const f = evaluate(e.arg, ctx);
+      const n = ctx.variables.length;
+      if (e.op === 'U') return checkDivisors(substituteMonomial(f, e.level, e.span), ctx, e.span);
+      return e.op === 'V' ? heckeVMonomial(f, e.level, n, e.span) : heckeTMonomial(f, e.level, n, e.span);
+    }
+    case 'derivative': {
+      const f = evaluate(e.arg, ctx);
+      const n = ctx.variables.length;
+      if (e.op === 'Dq' || e.op === 'Dz') return derivativeMonomial(e.op, f, n, e.span);
+      return e.op === 'heat' ? heatMonomial(f, n, e.span) : serreMonomial(f, n, e.span);
+    }
     case 'taylor':
-      throw evalError(evalCodes.notYetSupported, { what: 'taylor(f, ν)' }, e.span);
+      return taylorMonomial(evaluate(e.arg, ctx), e.order, ctx.variables.length, e.span);
     case 'bracket':
-      throw evalError(evalCodes.notYetSupported, { what: 'the Rankin–Cohen bracket [f, g]_n' }, e.span);
+      return bracketMonomial(evaluate(e.left, ctx), evaluate(e.right, ctx), e.order, ctx.variables.length, e.span);
   }
 }
 
