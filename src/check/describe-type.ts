@@ -4,7 +4,7 @@
  */
 import { type Rational, rat } from '../series/index.js';
 import type { Expr } from '../lang/ast.js';
-import { type ModularType, type FormClass, isConsistent, heisenbergCharacter } from '../types/index.js';
+import { type ModularType, type FormClass, isConsistent, heisenbergCharacter, formatType } from '../types/index.js';
 import type { Monomial } from './atom.js';
 import { evaluate, type EvalContext } from './evaluate.js';
 import { monomialText, isZeroMonomial } from './monomial.js';
@@ -27,6 +27,61 @@ export interface TypeDescription {
   /** The bound of Theorem A for this type (for N when meromorphic: the type F has after cross-multiplication by Q). */
   readonly bound: Rational | null;
   readonly derivation: string | null;
+  /** Every operator in the expression, innermost first, with its effect on the type. */
+  readonly operators: readonly OperatorStep[];
+}
+
+export interface OperatorStep {
+  /** The operator application as written. */
+  readonly text: string;
+  readonly input: string;
+  readonly output: string;
+}
+
+function typeText(m: Monomial, nvars: number): string {
+  const t = monomialType(m, nvars);
+  const cls = monomialClass(m);
+  return t === null ? 'every type (0)' : `${formatType(t)}, ${cls}`;
+}
+
+function childExprs(e: Expr): Expr[] {
+  switch (e.kind) {
+    case 'neg':
+      return [e.operand];
+    case 'binary':
+      return [e.left, e.right];
+    case 'power':
+      return [e.base];
+    case 'substitute':
+      return [e.target];
+    case 'hecke':
+    case 'derivative':
+    case 'taylor':
+      return [e.arg];
+    case 'bracket':
+      return [e.left, e.right];
+    default:
+      return [];
+  }
+}
+
+function isOperator(e: Expr): boolean {
+  return e.kind === 'hecke' || e.kind === 'derivative' || e.kind === 'taylor' || e.kind === 'bracket';
+}
+
+/** The operators of an expression, innermost first, each with input and output types. */
+export function operatorSteps(e: Expr, ctx: EvalContext): OperatorStep[] {
+  const steps = childExprs(e).flatMap((c) => operatorSteps(c, ctx));
+  if (isOperator(e)) {
+    const nvars = ctx.variables.length;
+    const inputs = childExprs(e).map((c) => typeText(evaluate(c, ctx), nvars));
+    steps.push({
+      text: ctx.text.slice(e.span.startOffset, e.span.endOffset),
+      input: inputs.join(' and '),
+      output: typeText(evaluate(e, ctx), nvars),
+    });
+  }
+  return steps;
 }
 
 export function describeType(expr: Expr, ctx: EvalContext): TypeDescription {
@@ -53,6 +108,7 @@ export function describeType(expr: Expr, ctx: EvalContext): TypeDescription {
     heisenberg: type === null ? [] : heisenbergCharacter(type),
     bound,
     derivation,
+    operators: operatorSteps(expr, ctx),
   };
 }
 
