@@ -11,11 +11,6 @@ import {
   type SeriesSource,
   type QZSeries,
   type Rational,
-  type Int,
-  type Slice,
-  JSBI,
-  ZERO,
-  ONE,
   rat,
   radd,
   rmul,
@@ -25,18 +20,16 @@ import {
   rmax,
   rIsZero,
   toNumber,
-  lcm,
   isZero,
   mod,
   isqrt,
   rational,
   makeSeries,
+  slicesFromRationalRows,
   sliceCountTo,
   sliceExponent,
   sliceAtExponent,
   sliceCoefficient,
-  trimSlice,
-  EMPTY_SLICE,
   zeroSeries,
 } from '../series/index.js';
 import { kronecker } from './kronecker.js';
@@ -100,16 +93,7 @@ export function heckeT(f: QZSeries, k: number, p: number, X: Rational): QZSeries
     }
     rows.push(row);
   }
-  let den: Int = ONE;
-  for (const row of rows) for (const v of row.values()) den = lcm(den, v.den);
-  const slices: Slice[] = rows.map((row) => {
-    if (row.size === 0) return EMPTY_SLICE;
-    const keys = [...row.keys()];
-    const lo = Math.min(...keys);
-    const c: Int[] = new Array<Int>(Math.max(...keys) - lo + 1).fill(ZERO);
-    for (const [h, v] of row) c[h - lo] = JSBI.multiply(v.num, JSBI.divide(den, v.den));
-    return trimSlice(lo, c);
-  });
+  const { den, slices } = slicesFromRationalRows(rows);
   return makeSeries(rat(start), 1, den, slices, X, f.nvars);
 }
 

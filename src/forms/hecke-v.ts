@@ -11,10 +11,7 @@ import {
   type SeriesSource,
   type QZSeries,
   type Rational,
-  type Int,
-  type Slice,
   JSBI,
-  ZERO,
   ONE,
 
   rat,
@@ -23,13 +20,11 @@ import {
   rfloor,
   rcmp,
   toNumber,
-  lcm,
   isZero,
   makeSeries,
+  slicesFromRationalRows,
   sliceCountTo,
   sliceExponent,
-  trimSlice,
-  EMPTY_SLICE,
   zeroSeries,
 } from '../series/index.js';
 import { divisors } from './divisor-sums.js';
@@ -72,16 +67,8 @@ export function heckeV(f: QZSeries, k: number, l: number, X: Rational): QZSeries
 }
 
 function collect(rows: Map<number, Map<number, Rational>>, start: number, n: number, X: Rational, nvars: number): QZSeries {
-  let den: Int = ONE;
-  for (const row of rows.values()) for (const v of row.values()) den = lcm(den, v.den);
-  const slices: Slice[] = new Array<Slice>(n).fill(EMPTY_SLICE);
-  for (const [nOut, row] of rows) {
-    const keys = [...row.keys()];
-    const lo = Math.min(...keys);
-    const c: Int[] = new Array<Int>(Math.max(...keys) - lo + 1).fill(ZERO);
-    for (const [h, v] of row) c[h - lo] = JSBI.multiply(v.num, JSBI.divide(den, v.den));
-    slices[nOut - start] = trimSlice(lo, c);
-  }
+  const ordered: Map<number, Rational>[] = Array.from({ length: n }, (_, i) => rows.get(start + i) ?? new Map<number, Rational>());
+  const { den, slices } = slicesFromRationalRows(ordered);
   return makeSeries(rat(start), 1, den, slices, X, nvars);
 }
 

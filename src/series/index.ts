@@ -17,3 +17,4 @@ export * from './derivative.js';
 export * from './substitute.js';
 export * from './divide-exact.js';
 export * from './series-source.js';
+export * from './rational-rows.js';

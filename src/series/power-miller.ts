@@ -10,12 +10,13 @@
  * coefficients and the division by n is exact (asserted). Otherwise the recurrence
  * runs over rationals.
  */
-import { JSBI, type Int, ONE, ZERO, int, isZero, lcm } from './integer.js';
+import { JSBI, type Int, ONE, int, isZero } from './integer.js';
 import { type Rational, rational, radd, rmul, rdiv, rpow, rat, rIsZero } from './rational.js';
 import { type QZSeries, makeSeries, sliceCountTo, leadingExponent } from './qz-series.js';
 import { type Slice, EMPTY_SLICE, sliceIsZero, sliceMultiply, sliceCombine, trimSlice } from './slice.js';
 import { rsub } from './rational.js';
 import { shiftSeries } from './shift.js';
+import { slicesFromRationalRows } from './rational-rows.js';
 
 /** Whether the lowest non-zero slice is a single monomial (required for Miller). */
 export function hasMonomialLead(f: QZSeries): boolean {
@@ -102,15 +103,5 @@ function millerRational(a: readonly Slice[], den: Int, k: number, n: number): Nu
     for (const [e, x] of acc) if (!rIsZero(x)) hm.set(e - e0, rdiv(x, scale));
     h.push(hm);
   }
-  let common: Int = ONE;
-  for (const m of h) for (const x of m.values()) common = lcm(common, x.den);
-  const slices = h.map((m) => {
-    if (m.size === 0) return EMPTY_SLICE;
-    const keys = [...m.keys()];
-    const lo = Math.min(...keys);
-    const c: Int[] = new Array<Int>(Math.max(...keys) - lo + 1).fill(ZERO);
-    for (const [e, x] of m) c[e - lo] = JSBI.multiply(x.num, JSBI.divide(common, x.den));
-    return trimSlice(lo, c);
-  });
-  return { den: common, slices };
+  return slicesFromRationalRows(h);
 }
