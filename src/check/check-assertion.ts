@@ -4,7 +4,7 @@
  * MATH.md §6 names. A quotient by a non-unit that is not a theta block: a failed exact
  * slice division proves a pole (refuted); otherwise the assertion stays unproved.
  */
-import { type Rational, rat, radd, rcmp, rmax, rationalToString, divideExact, JSBI, ONE, isZero, sliceExponent, rational } from '../series/index.js';
+import { type Rational, rat, radd, rcmp, rmax, rationalToString, divideExact, JSBI, ONE, isZero, sliceExponent, rational, powerText } from '../series/index.js';
 import type { Expr, TypeSpec } from '../lang/ast.js';
 import { typesEqual, typeDifferences, formatType, scalarIndexOf, mustVanish, holomorphyOrder, type Holomorphy } from '../types/index.js';
 import type { MismatchRecord } from '../verdict/index.js';
@@ -113,6 +113,6 @@ function meromorphicAssertion(m: Monomial, opts: CheckOptions): Outcome {
   return {
     verdict: 'unproved',
     type,
-    reason: `a quotient by a non-unit: it divides exactly up to q^${rationalToString(X)}, but holomorphy is not proven (MATH.md §4)`,
+    reason: `a quotient by a non-unit: it divides exactly up to ${powerText('q', X, false)}, but holomorphy is not proven (MATH.md §4)`,
   };
 }

@@ -5,7 +5,7 @@
  * assumption (an error, never a proof). Quasi-modular claims are compared to the
  * nominal bound plus `depth` q-steps and are at best unproved.
  */
-import { type Rational, rat, radd, rcmp, rmin, rationalToString, rToNumber, type QZSeries } from '../series/index.js';
+import { type Rational, rat, radd, rcmp, rmin, rationalToString, rToNumber, type QZSeries, powerText } from '../series/index.js';
 import type { Expr } from '../lang/ast.js';
 import { type ModularType, typesEqual, typeDifferences, scalarIndexOf, formatIndex, type FormClass } from '../types/index.js';
 import type { MismatchRecord, TypeRecord } from '../verdict/index.js';
@@ -138,7 +138,7 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
       type: claimType,
       compared,
       normalForm: normal,
-      reason: `no proven type: ${reasons}; the coefficients agree up to q^${rationalToString(to)} (${c.compared} compared; nominal bound q^${rationalToString(X)} plus ${opts.depth} q-steps)`,
+      reason: `no proven type: ${reasons}; the coefficients agree up to ${powerText('q', to, false)} (${c.compared} non-zero coefficients compared; nominal bound ${powerText('q', X, false)} plus ${opts.depth} q-steps)`,
     };
   }
   const marginTo = radd(X, rat(opts.margin));
@@ -159,17 +159,17 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
 }
 
 function marginFailure(ctx: EvalContext, m: Mismatch, marginTo: Rational): Outcome {
-  const where = `q^${rationalToString(m.q)} ζ^${rationalToString(rat(m.zetaHalves, 2))}`;
+  const where = `${powerText('q', m.q, false)} ${powerText('ζ', rat(m.zetaHalves, 2), false)}`;
   if (ctx.usedAssumptions.size > 0) {
     return {
       verdict: 'error',
-      reason: `assumption ${[...ctx.usedAssumptions].join(', ')} is false: the sides agree inside the bound but differ at ${where}, inside the margin (to q^${rationalToString(marginTo)})`,
+      reason: `assumption ${[...ctx.usedAssumptions].join(', ')} is false: the sides agree inside the bound but differ at ${where}, inside the margin (to ${powerText('q', marginTo, false)})`,
       mismatch: mismatchRecord(m),
     };
   }
   return {
     verdict: 'error',
-    reason: `internal error: the sides agree inside the bound but differ at ${where}, inside the margin (to q^${rationalToString(marginTo)}); a type rule is wrong — please report this claim`,
+    reason: `internal error: the sides agree inside the bound but differ at ${where}, inside the margin (to ${powerText('q', marginTo, false)}); a type rule is wrong — please report this claim`,
     mismatch: mismatchRecord(m),
   };
 }

@@ -97,6 +97,7 @@ function atom(a: Atom): Monomial {
 }
 
 export function evaluate(e: Expr, ctx: EvalContext): Monomial {
+  oneVariable(ctx, e.span);
   switch (e.kind) {
     case 'number':
       return constantMonomial(rational(intFromString(e.value)));

@@ -5,7 +5,7 @@
  * division by zero. A quasi-modular divisor with no non-zero coefficient within its
  * nominal bound plus `depth` q-steps cannot be shown non-zero.
  */
-import { rat, radd, rmax, rcmp, isZeroSeries, rationalToString, type Rational } from '../series/index.js';
+import { rat, radd, rmax, rcmp, isZeroSeries, rationalToString, type Rational, powerText } from '../series/index.js';
 import type { Span } from '../lang/span.js';
 import { scalarIndexOf } from '../types/index.js';
 import { theoremABound } from '../bound/index.js';
@@ -19,14 +19,14 @@ export function assertDivisorNonZero(atom: Atom, span: Span | null, depth: numbe
   const proven = atom.cls === 'modular';
   const X: Rational = proven ? bound : radd(rmax(bound, rat(0)), rat(depth));
   if (rcmp(X, atom.source.valuation) < 0) {
-    if (proven) throw evalError(evalCodes.divisionByZero, { what: atom.key }, span, [`its type forces it to vanish (bound q^${rationalToString(X)} is below its lowest exponent)`]);
+    if (proven) throw evalError(evalCodes.divisionByZero, { what: atom.key }, span, [`its type forces it to vanish (bound ${powerText('q', X, false)} is below its lowest exponent)`]);
   } else if (!isZeroSeries(atom.source.expand(X))) {
     checked.add(atom.key);
     return;
   }
   if (proven) {
     throw evalError(evalCodes.divisionByZero, { what: atom.key }, span, [
-      `all its coefficients up to q^${rationalToString(X)} vanish, and that is its Theorem A bound (MATH.md §6)`,
+      `all its coefficients up to ${powerText('q', X, false)} vanish, and that is its Theorem A bound (MATH.md §6)`,
     ]);
   }
   throw evalError(evalCodes.divisorNotShownNonZero, { what: atom.key, order: rationalToString(X) }, span);

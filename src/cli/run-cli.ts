@@ -7,6 +7,8 @@ import { helpText } from './help.js';
 import { toolVersion } from './version.js';
 import { type CliIo, EXIT_FAILED, EXIT_USAGE } from './io.js';
 import { runExpand } from './commands/expand.js';
+import { runCheck } from './commands/check.js';
+import { runType } from './commands/type.js';
 
 export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
   const parsed = parseArgs(argv);
@@ -27,6 +29,10 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
     switch (args.command) {
       case 'expand':
         return runExpand(args, io);
+      case 'check':
+        return runCheck(args, io);
+      case 'type':
+        return runType(args, io);
       default:
         io.stderr(`sturmcheck: '${args.command}' is not available in this version yet\n`);
         return EXIT_USAGE;

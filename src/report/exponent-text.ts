@@ -1,15 +1,7 @@
-/**
- * Exponents and coefficients as text (CLAIMS.md: reduced fractions, `q^(1/8)`,
- * `ζ^(-1/2)`, every digit shown). Anything but a non-negative integer is wrapped in
- * parentheses so that `q^(-1)` cannot be misread.
- */
-import { type Rational, rationalToString, rIsInteger, rcmp, rat } from '../series/index.js';
+/** Exponent helpers for renderers; the power notation itself lives in series/power-text.ts. */
+import { type Rational, rat } from '../series/index.js';
 
-export function powerText(base: string, e: Rational, omitOne = true): string {
-  const s = rationalToString(e);
-  if (rIsInteger(e) && rcmp(e, rat(0)) >= 0) return omitOne && s === '1' ? base : `${base}^${s}`;
-  return `${base}^(${s})`;
-}
+export { powerText } from '../series/index.js';
 
 /** ζ-exponent from units of ½. */
 export function zetaExponent(halves: number): Rational {

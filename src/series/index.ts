@@ -18,3 +18,4 @@ export * from './substitute.js';
 export * from './divide-exact.js';
 export * from './series-source.js';
 export * from './rational-rows.js';
+export * from './power-text.js';

@@ -77,7 +77,7 @@ describe('quasi-modular claims are at best unproved (MATH.md §5)', () => {
     const v = checkOne('Dq(E_4) == (E_2*E_4 - E_6)/3'); // Ramanujan 1916, eq. (30)
     expect(v.verdict).toBe('unproved');
     expect(v.reason).toMatch(/E_2 is quasi-modular/);
-    expect(v.reason).toMatch(/agree up to q\^\d+/);
+    expect(v.reason).toMatch(/agree up to q\^\(21\/2\)/); // nominal bound 1/2 plus 10 q-steps
   });
   it('a mismatch within the nominal bound plus --depth refutes', () => {
     const v = checkOne('Dq(E_4)/240 == 0'); // D_qE_4 = 240Σnσ_3(n)qⁿ: q¹ coefficient 1, past the nominal bound 1/2

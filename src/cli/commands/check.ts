@@ -1,0 +1,101 @@
+/**
+ * `sturmcheck [check] PATH…` (CLAIMS.md): discover the claim files, check every
+ * claim in order, render the report in the chosen format to stdout or `--output`,
+ * and decide the exit status: 2 when the command could not do all it was asked
+ * (it wins), else 1 when a claim missed its expected verdict, else 0.
+ */
+import { resolve } from 'node:path';
+import { DEFAULT_CHECK_OPTIONS, type CheckOptions } from '../../check/index.js';
+import { summarize, type Verdict } from '../../verdict/index.js';
+import { REPORTERS, type Reporter } from '../../report/index.js';
+import type { ParsedArgs } from '../parse-args.js';
+import { type CliIo, EXIT_FAILED, EXIT_OK, EXIT_USAGE } from '../io.js';
+import { DEFAULT_DEPTH, DEFAULT_MAX_TERMS } from '../options.js';
+import { toolVersion } from '../version.js';
+import { discoverClaimFiles } from '../discover.js';
+import { checkPath } from '../check-path.js';
+import { startProgress } from '../spinner.js';
+import { wantsColor } from '../color.js';
+import { writeFileAtomic } from '../atomic-write.js';
+
+/** Options the table accepts for `check` whose feature is not built yet. */
+const NOT_YET = ['report', 'certificates'] as const;
+
+function usageError(io: CliIo, message: string): number {
+  io.stderr(`sturmcheck: ${message}\n(see sturmcheck check --help)\n`);
+  return EXIT_USAGE;
+}
+
+function checkOptions(args: ParsedArgs): CheckOptions {
+  const num = (name: string, fallback: number): number => {
+    const v = args.options.get(name);
+    return typeof v === 'number' ? v : fallback;
+  };
+  return { ...DEFAULT_CHECK_OPTIONS, maxTerms: num('max-terms', DEFAULT_MAX_TERMS), depth: num('depth', DEFAULT_DEPTH) };
+}
+
+/** The reporter for `--format`, or the reason there is none. */
+function chooseReporter(args: ParsedArgs): Reporter | string {
+  const format = args.options.get('format');
+  const name = typeof format === 'string' ? format : 'text';
+  return REPORTERS.get(name) ?? `--format ${name} is not available in this version yet`;
+}
+
+interface Run {
+  readonly verdicts: Verdict[];
+  readonly sources: Map<string, string>;
+  readonly problems: string[];
+}
+
+function checkAll(args: ParsedArgs, io: CliIo, color: boolean): Run {
+  const discovery = discoverClaimFiles(args.positionals, io.cwd);
+  const run: Run = { verdicts: [], sources: new Map(), problems: [...discovery.problems] };
+  const progress = startProgress(io, color);
+  try {
+    const opts = checkOptions(args);
+    for (const file of discovery.files) {
+      const result = checkPath(file, opts, { claimStarted: progress.claimStarted });
+      if (!result.ok) {
+        run.problems.push(result.problem);
+        continue;
+      }
+      run.verdicts.push(...result.verdicts);
+      run.sources.set(file.display, result.text);
+    }
+  } finally {
+    progress.stop();
+  }
+  return run;
+}
+
+/** Writes the report; false (after saying why) when the output file cannot be written. */
+function deliver(args: ParsedArgs, io: CliIo, text: string): boolean {
+  const output = args.options.get('output');
+  if (typeof output !== 'string') {
+    io.stdout(text);
+    return true;
+  }
+  try {
+    writeFileAtomic(resolve(io.cwd, output), text);
+    return true;
+  } catch (e) {
+    io.stderr(`sturmcheck: cannot write ${output}: ${e instanceof Error ? e.message : String(e)}\n`);
+    return false;
+  }
+}
+
+export function runCheck(args: ParsedArgs, io: CliIo): number {
+  for (const name of NOT_YET) if (args.options.has(name)) return usageError(io, `--${name} is not available in this version yet`);
+  const reporter = chooseReporter(args);
+  if (typeof reporter === 'string') return usageError(io, reporter);
+  if (args.positionals.length === 0) return usageError(io, 'check needs at least one PATH (a .claim file or a folder)');
+  const toFile = typeof args.options.get('output') === 'string';
+  const stdoutColor = wantsColor(args, io, !toFile && io.stdoutIsTerminal);
+  const run = checkAll(args, io, wantsColor(args, io, io.stderrIsTerminal));
+  for (const p of run.problems) io.stderr(`sturmcheck: ${p}\n`);
+  const style = { color: stdoutColor, verbose: args.options.get('verbose') === true };
+  const text = reporter.render({ verdicts: run.verdicts, sources: run.sources, toolVersion: toolVersion() }, style);
+  const written = deliver(args, io, text);
+  if (run.problems.length > 0 || !written) return EXIT_USAGE;
+  return summarize(run.verdicts).asExpected ? EXIT_OK : EXIT_FAILED;
+}

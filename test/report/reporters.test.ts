@@ -1,0 +1,15 @@
+/** The name → reporter map of `--format`. */
+import { describe, expect, it } from 'vitest';
+import { REPORTERS } from '../../src/report/index.js';
+import { optionSpec } from '../../src/cli/options.js';
+
+describe('reporters', () => {
+  it('text and json exist; junit is not built yet', () => {
+    expect([...REPORTERS.keys()]).toEqual(['text', 'json']);
+  });
+
+  it('every reporter is a choice of --format', () => {
+    const choices = optionSpec('format')!.choices!;
+    for (const name of REPORTERS.keys()) expect(choices).toContain(name);
+  });
+});
