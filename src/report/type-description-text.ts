@@ -49,6 +49,7 @@ export function typeDescriptionText(expression: string, d: TypeDescription, verb
     ['theta block', d.thetaBlock === null ? 'none' : `${d.thetaBlock}: holomorphic by the divisor rule (MATH.md §3)`],
   );
   if (d.type !== null) rows.push(['heisenberg', heisenbergLine(d)]);
+  d.operators.forEach((step, i) => rows.push([i === 0 ? 'operators' : '', `${step.text}: ${step.input} → ${step.output}`]));
   rows.push(...boundLines(d));
   return rows.map(([k, v]) => `${k.padEnd(13)}${v}`).join('\n') + '\n';
 }
