@@ -4,7 +4,7 @@
  * MATH.md §6 names. A quotient by a non-unit that is not a theta block: a failed exact
  * slice division proves a pole (refuted); otherwise the assertion stays unproved.
  */
-import { type Rational, rat, radd, rcmp, rmax, rationalToString, divideExact, JSBI, ONE, isZero, sliceExponent, rational, powerText } from '../series/index.js';
+import { type Rational, rat, radd, rcmp, rmax, rationalToString, divideExact, JSBI, ONE, isZero, sliceExponent, rational, powerText, dense, sliceIsZero, hasUnitLead } from '../series/index.js';
 import type { Expr, TypeSpec } from '../lang/ast.js';
 import { typesEqual, typeDifferences, formatType, scalarIndexOf, mustVanish, holomorphyOrder, type Holomorphy } from '../types/index.js';
 import type { MismatchRecord } from '../verdict/index.js';
@@ -33,7 +33,7 @@ function firstForbidden(m: Monomial, property: Holomorphy, index: Rational): Off
   if (rcmp(X, src.valuation) < 0) return null;
   const s = src.expand(X);
   for (let i = 0; i < s.slices.length; i++) {
-    const sl = s.slices[i]!;
+    const sl = dense(s.slices[i]!);
     const q = sliceExponent(s, i);
     const hits: Offending[] = [];
     sl.c.forEach((v, k) => {
@@ -103,8 +103,8 @@ function meromorphicAssertion(m: Monomial, opts: CheckOptions): Outcome {
   const qs = numeratorSource(Q);
   const X = radd(rmax(boundOfType(monomialType(N, 1)!), rat(0)), rat(opts.depth));
   const qSeries = qs.expand(radd(X, qs.valuation));
-  const lead = qSeries.slices.find((s) => s.c.length > 0);
-  const monic = JSBI.equal(qSeries.den, ONE) && lead !== undefined && JSBI.equal(JSBI.multiply(lead.c[0]!, lead.c[0]!), ONE);
+  const lead = qSeries.slices.find((s) => !sliceIsZero(s));
+  const monic = JSBI.equal(qSeries.den, ONE) && lead !== undefined && hasUnitLead(lead);
   if (!monic) return { verdict: 'unproved', type, reason: 'a quotient by a non-unit: its holomorphy is not proven (MATH.md §4)' };
   const g = divideExact(numeratorSource(N).expand(radd(X, qs.valuation)), qSeries);
   if (g === null) {

@@ -67,7 +67,7 @@ export function normalForm(l: Monomial, r: Monomial): NormalForm {
 function mismatchRecord(m: Mismatch): MismatchRecord {
   return {
     q: rationalToString(m.q),
-    zeta: [rationalToString(rat(m.zetaHalves, 2))],
+    zeta: m.zetaHalves.map((h) => rationalToString(rat(h, 2))),
     left: rationalToString(m.left),
     right: rationalToString(m.right),
   };
@@ -159,7 +159,7 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
 }
 
 function marginFailure(ctx: EvalContext, m: Mismatch, marginTo: Rational): Outcome {
-  const where = `${powerText('q', m.q, false)} ${powerText('ζ', rat(m.zetaHalves, 2), false)}`;
+  const where = `${powerText('q', m.q, false)} ${m.zetaHalves.map((h, i) => powerText(m.zetaHalves.length === 1 ? 'ζ' : `ζ${i + 1}`, rat(h, 2), false)).join(' ')}`;
   if (ctx.usedAssumptions.size > 0) {
     return {
       verdict: 'error',

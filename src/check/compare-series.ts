@@ -1,26 +1,28 @@
 /**
  * Coefficient-by-coefficient comparison of the two sides of F = 0 up to a q-order:
- * the first mismatch in the order of CLAIMS.md (lowest q, then |ℓ|, then ℓ), with
- * both sides' exact values, and the number of coefficients compared (positions where
- * either side is non-zero; every other coefficient is zero on both).
+ * the first mismatch in the order of CLAIMS.md (lowest q, then the ζ-exponent by a
+ * norm — |ℓ| for one variable, ℓᵀM⁻¹ℓ for several — then lexicographically), with both
+ * sides' exact values, and the number of coefficients compared (positions where either
+ * side is non-zero; every other coefficient is zero on both).
  */
 import {
   type QZSeries,
   type Rational,
   rat,
   rcmp,
-  isZero,
   linearCombination,
   truncateSeries,
   sliceExponent,
   coefficientAt,
   rationalToString,
+  forEachTerm,
+  vectorKey,
 } from '../series/index.js';
 
 export interface Mismatch {
   readonly q: Rational;
-  /** ζ-exponent in units of ½. */
-  readonly zetaHalves: number;
+  /** ζ-exponent vector in units of ½. */
+  readonly zetaHalves: readonly number[];
   readonly left: Rational;
   readonly right: Rational;
 }
@@ -30,16 +32,26 @@ export interface Comparison {
   readonly compared: number;
 }
 
+/** The norm that orders ζ-exponents within a q-slice; exponents given in halves. */
+export type ZetaNorm = (halves: readonly number[]) => Rational;
+
+/** One variable: |ℓ|; several variables without an index: ℓᵀℓ. */
+export const defaultZetaNorm: ZetaNorm = (e) =>
+  e.length === 1 ? rat(Math.abs(e[0]!), 2) : rat(e.reduce((s, x) => s + x * x, 0), 4);
+
+function lexCompare(x: readonly number[], y: readonly number[]): number {
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
+  return 0;
+}
+
 function nonZeroPositions(s: QZSeries, into: Set<string>): void {
   s.slices.forEach((sl, i) => {
     const x = rationalToString(sliceExponent(s, i));
-    sl.c.forEach((v, k) => {
-      if (!isZero(v)) into.add(`${x}|${sl.lo + k}`);
-    });
+    forEachTerm(sl, (e) => into.add(`${x}|${vectorKey(e)}`));
   });
 }
 
-export function compareTo(left: QZSeries, right: QZSeries, X: Rational): Comparison {
+export function compareTo(left: QZSeries, right: QZSeries, X: Rational, norm: ZetaNorm = defaultZetaNorm): Comparison {
   if (rcmp(left.exactTo, X) < 0 || rcmp(right.exactTo, X) < 0) {
     throw new RangeError('internal: a side is not known to the q-order compared');
   }
@@ -53,17 +65,21 @@ export function compareTo(left: QZSeries, right: QZSeries, X: Rational): Compari
   nonZeroPositions(a, positions);
   nonZeroPositions(b, positions);
   for (let i = 0; i < d.slices.length; i++) {
-    const sl = d.slices[i]!;
-    let best: number | null = null;
-    sl.c.forEach((v, k) => {
-      if (isZero(v)) return;
-      const e = sl.lo + k;
-      if (best === null || Math.abs(e) < Math.abs(best) || (Math.abs(e) === Math.abs(best) && e < best)) best = e;
+    let best: readonly number[] | null = null;
+    let bestNorm: Rational | null = null;
+    forEachTerm(d.slices[i]!, (e) => {
+      const n = norm(e);
+      const c = bestNorm === null ? -1 : rcmp(n, bestNorm) || lexCompare(e, best!);
+      if (c < 0) {
+        best = e;
+        bestNorm = n;
+      }
     });
     if (best !== null) {
       const q = sliceExponent(d, i);
+      const e: readonly number[] = best;
       return {
-        mismatch: { q, zetaHalves: best, left: coefficientAt(a, q, best), right: coefficientAt(b, q, best) },
+        mismatch: { q, zetaHalves: e, left: coefficientAt(a, q, e), right: coefficientAt(b, q, e) },
         compared: positions.size,
       };
     }

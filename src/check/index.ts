@@ -10,3 +10,4 @@ export { typeRecord } from './type-record.js';
 export { describeType, type TypeDescription } from './describe-type.js';
 export { boundOfType } from './side-zero.js';
 export { boundDerivation } from './check-identity.js';
+export { compareTo, defaultZetaNorm, type ZetaNorm, type Mismatch } from './compare-series.js';

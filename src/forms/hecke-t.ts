@@ -25,6 +25,7 @@ import {
   isqrt,
   rational,
   makeSeries,
+  dense,
   slicesFromRationalRows,
   sliceCountTo,
   sliceExponent,
@@ -47,8 +48,9 @@ function coefficientOfDiscriminant(f: QZSeries, N: number): Rational {
 /** The least N = 4n − r² among the non-zero terms. */
 function leastDiscriminant(f: QZSeries): number | null {
   let best: number | null = null;
-  f.slices.forEach((sl, i) => {
+  f.slices.forEach((slice, i) => {
     const n = sliceExponent(f, i);
+    const sl = dense(slice);
     sl.c.forEach((v, j) => {
       if (isZero(v)) return;
       const r = (sl.lo + j) / 2;

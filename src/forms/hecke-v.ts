@@ -22,6 +22,7 @@ import {
   toNumber,
   isZero,
   makeSeries,
+  dense,
   slicesFromRationalRows,
   sliceCountTo,
   sliceExponent,
@@ -57,7 +58,7 @@ export function heckeV(f: QZSeries, k: number, l: number, X: Rational): QZSeries
       if (n0 % (l / a) !== 0) continue;
       const nOut = (n0 * a * a) / l;
       if (nOut - start >= n) continue;
-      const sl = f.slices[i]!;
+      const sl = dense(f.slices[i]!);
       sl.c.forEach((v, j) => {
         if (!isZero(v)) addTerm(rows, nOut, (sl.lo + j) * a, rmul(weight, { num: v, den: f.den }));
       });

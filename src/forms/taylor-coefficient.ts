@@ -24,6 +24,7 @@ import {
   productSource,
   powerSource,
   makeSeries,
+  dense,
   trimSlice,
   type WeightedSource,
 } from '../series/index.js';
@@ -37,7 +38,8 @@ function factorial(n: number): Int {
 
 /** χ_μ: the ζ-moment Σ_r c(x, r) r^μ / μ! of every slice, as a q-series. */
 export function zetaMoment(s: QZSeries, mu: number): QZSeries {
-  const slices = s.slices.map((sl) => {
+  const slices = s.slices.map((slice) => {
+    const sl = dense(slice);
     let t = ZERO;
     sl.c.forEach((v, k) => {
       if (!JSBI.equal(v, ZERO)) t = JSBI.add(t, JSBI.multiply(v, JSBI.exponentiate(int(sl.lo + k), int(mu))));

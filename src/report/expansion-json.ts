@@ -20,7 +20,7 @@ export function expansionJson(expression: string, e: Expansion): ExpansionJson {
     qOrder: rationalToString(e.qOrder),
     terms: expansionTerms(e.series).map((t) => ({
       q: rationalToString(t.q),
-      zeta: [rationalToString(zetaExponent(t.zetaHalves))],
+      zeta: t.zetaHalves.map((h) => rationalToString(zetaExponent(h))),
       c: rationalToString(t.c),
     })),
   };

@@ -1,34 +1,33 @@
 /**
- * The non-zero coefficients of a one-variable expansion in the order CLAIMS.md fixes
- * for output: by q-exponent, then by |ℓ|, then by ℓ.
+ * The non-zero coefficients of an expansion in the order CLAIMS.md fixes for output:
+ * by q-exponent, then by the ζ-norm (|ℓ| for one variable, ℓᵀM⁻¹ℓ for several), then
+ * lexicographically.
  */
-import {
-  type QZSeries,
-  type Rational,
-  isZero,
-  rational,
-  sliceExponent,
-} from '../series/index.js';
+import { type QZSeries, type Rational, rational, rcmp, sliceExponent, forEachTerm } from '../series/index.js';
+import { type ZetaNorm, defaultZetaNorm } from '../check/index.js';
 
 export interface ExpansionTerm {
   readonly q: Rational;
-  /** ζ-exponent in units of ½. */
-  readonly zetaHalves: number;
+  /** ζ-exponent vector in units of ½. */
+  readonly zetaHalves: readonly number[];
   readonly c: Rational;
 }
 
-export function sliceTerms(s: QZSeries, i: number): ExpansionTerm[] {
-  const sl = s.slices[i]!;
-  const q = sliceExponent(s, i);
-  const out: ExpansionTerm[] = [];
-  sl.c.forEach((v, k) => {
-    if (!isZero(v)) out.push({ q, zetaHalves: sl.lo + k, c: rational(v, s.den) });
-  });
-  return out.sort((a, b) => Math.abs(a.zetaHalves) - Math.abs(b.zetaHalves) || a.zetaHalves - b.zetaHalves);
+function lexCompare(x: readonly number[], y: readonly number[]): number {
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
+  return 0;
 }
 
-export function expansionTerms(s: QZSeries): ExpansionTerm[] {
+/** The terms of slice i in the order of CLAIMS.md: by the norm, then lexicographically. */
+export function sliceTerms(s: QZSeries, i: number, norm: ZetaNorm = defaultZetaNorm): ExpansionTerm[] {
+  const q = sliceExponent(s, i);
   const out: ExpansionTerm[] = [];
-  for (let i = 0; i < s.slices.length; i++) out.push(...sliceTerms(s, i));
+  forEachTerm(s.slices[i]!, (e, v) => out.push({ q, zetaHalves: e, c: rational(v, s.den) }));
+  return out.sort((a, b) => rcmp(norm(a.zetaHalves), norm(b.zetaHalves)) || lexCompare(a.zetaHalves, b.zetaHalves));
+}
+
+export function expansionTerms(s: QZSeries, norm: ZetaNorm = defaultZetaNorm): ExpansionTerm[] {
+  const out: ExpansionTerm[] = [];
+  for (let i = 0; i < s.slices.length; i++) out.push(...sliceTerms(s, i, norm));
   return out;
 }

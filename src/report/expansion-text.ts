@@ -18,13 +18,24 @@ function coefficientText(c: Rational, first: boolean, hasMonomial: boolean): str
   return negative ? ` - ${body}` : ` + ${body}`;
 }
 
-/** A Laurent polynomial in ζ, e.g. `ζ^(-1) + 10 + ζ`. */
+function lexCompare(x: readonly number[], y: readonly number[]): number {
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
+  return 0;
+}
+
+/** ζ^ℓ as text; several variables are written ζ1, ζ2, … in the order declared. */
+function zetaMonomial(halves: readonly number[]): string {
+  const name = (i: number): string => (halves.length === 1 ? 'ζ' : `ζ${i + 1}`);
+  return halves.map((h, i) => (h === 0 ? '' : powerText(name(i), zetaExponent(h)))).join('');
+}
+
+/** A Laurent polynomial in ζ, e.g. `ζ^(-1) + 10 + ζ`, terms by increasing exponent. */
 export function sliceText(e: Expansion, i: number): string {
-  const terms = sliceTerms(e.series, i).sort((a, b) => a.zetaHalves - b.zetaHalves);
+  const terms = sliceTerms(e.series, i).sort((a, b) => lexCompare(a.zetaHalves, b.zetaHalves));
   if (terms.length === 0) return '0';
   return terms
     .map((t, k) => {
-      const mono = t.zetaHalves === 0 ? '' : powerText('ζ', zetaExponent(t.zetaHalves));
+      const mono = zetaMonomial(t.zetaHalves);
       return coefficientText(t.c, k === 0, mono !== '') + mono;
     })
     .join('');

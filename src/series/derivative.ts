@@ -18,9 +18,9 @@ export function derivativeQ(s: QZSeries): QZSeries {
   return makeSeries(s.start, s.qDen, JSBI.multiply(s.den, int(L)), slices, s.exactTo, s.nvars);
 }
 
-/** D_ζ; ζ-exponents are stored in halves, so ℓ = e/2. */
-export function derivativeZeta(s: QZSeries): QZSeries {
-  const weight = (e: number): Int => int(e);
+/** D_{ζ_i} (i = 0 for one variable); ζ-exponents are stored in halves, so ℓ = e/2. */
+export function derivativeZeta(s: QZSeries, variable = 0): QZSeries {
+  const weight = (e: readonly number[]): Int => int(e[variable]!);
   const slices = s.slices.map((sl) => sliceWeighted(sl, weight));
   return makeSeries(s.start, s.qDen, JSBI.multiply(s.den, int(2)), slices, s.exactTo, s.nvars);
 }

@@ -6,7 +6,7 @@
  */
 import { JSBI, type Int, ZERO } from './integer.js';
 import { type QZSeries, makeSeries } from './qz-series.js';
-import { type Slice, sliceIsZero, sliceHi, trimSlice } from './slice.js';
+import { type Slice, dense, sliceIsZero, sliceHi, trimSlice } from './slice.js';
 import { planProduct } from './product-plan.js';
 import { polyMulKaratsuba } from './karatsuba.js';
 
@@ -19,7 +19,7 @@ function zetaRange(s: QZSeries, count: number): ZetaRange {
   let lo = Infinity;
   let hi = -Infinity;
   for (let i = 0; i < Math.min(count, s.slices.length); i++) {
-    const sl = s.slices[i]!;
+    const sl = dense(s.slices[i]!);
     if (sliceIsZero(sl)) continue;
     lo = Math.min(lo, sl.lo);
     hi = Math.max(hi, sliceHi(sl));
@@ -31,7 +31,7 @@ function pack(s: QZSeries, count: number, r: ZetaRange, W: number): Int[] {
   const n = Math.min(count, s.slices.length);
   const out: Int[] = new Array<Int>(Math.max(0, (n - 1) * W + (r.hi - r.lo + 1))).fill(ZERO);
   for (let i = 0; i < n; i++) {
-    const sl = s.slices[i]!;
+    const sl = dense(s.slices[i]!);
     for (let k = 0; k < sl.c.length; k++) out[i * W + sl.lo + k - r.lo] = sl.c[k]!;
   }
   return out;

@@ -5,7 +5,7 @@
  */
 import { JSBI, type Int, ZERO, isZero } from './integer.js';
 import { type QZSeries, makeSeries } from './qz-series.js';
-import { type Slice, EMPTY_SLICE, sliceIsZero, sliceHi, trimSlice } from './slice.js';
+import { type Slice, EMPTY_SLICE, dense, sliceIsZero, sliceHi, sliceWeight, trimSlice } from './slice.js';
 import { planProduct } from './product-plan.js';
 
 interface SparseTerm {
@@ -17,21 +17,21 @@ interface SparseTerm {
 function sparseTerms(s: QZSeries, count: number): SparseTerm[] {
   const out: SparseTerm[] = [];
   for (let i = 0; i < Math.min(count, s.slices.length); i++) {
-    const sl = s.slices[i]!;
+    const sl = dense(s.slices[i]!);
     for (let k = 0; k < sl.c.length; k++) if (!isZero(sl.c[k]!)) out.push({ i, e: sl.lo + k, c: sl.c[k]! });
   }
   return out;
 }
 
 /** `sparse · dense`; the product is commutative, the roles only steer the loops. */
-export function mulSparseDense(sparse: QZSeries, dense: QZSeries): QZSeries {
-  const { a, b, start, qDen, exactTo, count } = planProduct(sparse, dense);
+export function mulSparseDense(sparse: QZSeries, full: QZSeries): QZSeries {
+  const { a, b, start, qDen, exactTo, count } = planProduct(sparse, full);
   const terms = sparseTerms(a, count);
   const lo = new Array<number>(count).fill(Infinity);
   const hi = new Array<number>(count).fill(-Infinity);
   for (const t of terms) {
     for (let j = 0; j < b.slices.length && t.i + j < count; j++) {
-      const bj = b.slices[j]!;
+      const bj = dense(b.slices[j]!);
       if (sliceIsZero(bj)) continue;
       lo[t.i + j] = Math.min(lo[t.i + j]!, bj.lo + t.e);
       hi[t.i + j] = Math.max(hi[t.i + j]!, sliceHi(bj) + t.e);
@@ -40,7 +40,7 @@ export function mulSparseDense(sparse: QZSeries, dense: QZSeries): QZSeries {
   const acc: Int[][] = lo.map((l, k) => (l === Infinity ? [] : new Array<Int>(hi[k]! - l + 1).fill(ZERO)));
   for (const t of terms) {
     for (let j = 0; j < b.slices.length && t.i + j < count; j++) {
-      const bj = b.slices[j]!;
+      const bj = dense(b.slices[j]!);
       if (sliceIsZero(bj)) continue;
       const row = acc[t.i + j]!;
       const off = bj.lo + t.e - lo[t.i + j]!;
@@ -57,6 +57,6 @@ export function mulSparseDense(sparse: QZSeries, dense: QZSeries): QZSeries {
 /** Number of non-zero numerators among the first `count` slices. */
 export function nonZeroTerms(s: QZSeries, count = s.slices.length): number {
   let n = 0;
-  for (let i = 0; i < Math.min(count, s.slices.length); i++) for (const v of s.slices[i]!.c) if (!isZero(v)) n++;
+  for (let i = 0; i < Math.min(count, s.slices.length); i++) n += sliceWeight(s.slices[i]!);
   return n;
 }

@@ -13,7 +13,7 @@
 import { JSBI, type Int, ONE, int, isZero } from './integer.js';
 import { type Rational, rational, radd, rmul, rdiv, rpow, rat, rIsZero } from './rational.js';
 import { type QZSeries, makeSeries, sliceCountTo, leadingExponent } from './qz-series.js';
-import { type Slice, EMPTY_SLICE, sliceIsZero, sliceMultiply, sliceCombine, trimSlice } from './slice.js';
+import { type Slice, type DenseSlice, EMPTY_SLICE, dense, sliceIsZero, sliceWeight, sliceMultiply, sliceCombine, trimSlice } from './slice.js';
 import { rsub } from './rational.js';
 import { shiftSeries } from './shift.js';
 import { slicesFromRationalRows } from './rational-rows.js';
@@ -23,7 +23,7 @@ export function hasMonomialLead(f: QZSeries): boolean {
   const v = leadingExponent(f);
   if (v === null) return false;
   const i = f.slices.findIndex((s) => !sliceIsZero(s));
-  return f.slices[i]!.c.length === 1;
+  return f.nvars === 1 && sliceWeight(f.slices[i]!) === 1;
 }
 
 /** f^k for an integer k by Miller's recurrence; f must have a monomial lowest slice. */
@@ -32,7 +32,7 @@ export function powerMiller(f: QZSeries, k: number): QZSeries {
   if (v === null || !hasMonomialLead(f)) throw new RangeError('internal: Miller recurrence needs a monomial leading slice');
   const lead = f.slices.findIndex((s) => !sliceIsZero(s));
   // g = f / q^v has a_0 as its slice 0; f^k = q^(kv) · g^k, and g^k is exact as far as g is.
-  const a = f.slices.slice(lead);
+  const a = f.slices.slice(lead).map(dense);
   const X = rsub(f.exactTo, v);
   const n = sliceCountTo(rat(0), f.qDen, X);
   const a0 = a[0]!;
@@ -46,7 +46,7 @@ interface Numerators {
   readonly slices: Slice[];
 }
 
-function millerIntegral(a: readonly Slice[], a0: Slice, k: number, n: number): Numerators {
+function millerIntegral(a: readonly DenseSlice[], a0: DenseSlice, k: number, n: number): Numerators {
   const sgn = JSBI.equal(a0.c[0]!, ONE) ? 1 : -1;
   const e0 = a0.lo;
   const h: Slice[] = new Array<Slice>(n).fill(EMPTY_SLICE);
@@ -63,19 +63,20 @@ function millerIntegral(a: readonly Slice[], a0: Slice, k: number, n: number): N
       acc = sliceCombine(acc, null, sliceMultiply(a[j]!, h[m - j]!), int(w));
     }
     const divisor = int(m * sgn);
-    const c = acc.c.map((x) => {
+    const d = dense(acc);
+    const c = d.c.map((x) => {
       const qt = JSBI.divide(x, divisor);
       if (!JSBI.equal(JSBI.multiply(qt, divisor), x)) throw new RangeError('internal: inexact Miller step');
       return qt;
     });
-    h[m] = trimSlice(acc.lo - e0, c);
+    h[m] = trimSlice(d.lo - e0, c);
   }
   return { den: ONE, slices: h };
 }
 
 /** The same recurrence with rational coefficients (rare: non-monic or non-integral f). */
-function millerRational(a: readonly Slice[], den: Int, k: number, n: number): Numerators {
-  const toR = (s: Slice): Map<number, Rational> => {
+function millerRational(a: readonly DenseSlice[], den: Int, k: number, n: number): Numerators {
+  const toR = (s: DenseSlice): Map<number, Rational> => {
     const m = new Map<number, Rational>();
     s.c.forEach((x, i) => {
       if (!isZero(x)) m.set(s.lo + i, rational(x, den));

@@ -16,7 +16,7 @@ import {
   rcmp,
   rat,
 } from './rational.js';
-import { type Slice, EMPTY_SLICE, sliceIsZero, sliceContentGcd, sliceDivideBy, sliceCoefficient } from './slice.js';
+import { type Slice, EMPTY_SLICE, isSparse, sliceIsZero, sliceScale, sliceContentGcd, sliceDivideBy, sliceCoefficient } from './slice.js';
 
 export interface QZSeries {
   /** Number of abelian variables; 1 for the dense one-variable path. */
@@ -71,7 +71,7 @@ export function reduceDenominator(s: QZSeries): QZSeries {
   let slices = s.slices;
   if (sign(den) < 0) {
     den = JSBI.unaryMinus(den);
-    slices = slices.map((sl) => ({ lo: sl.lo, c: sl.c.map((v) => JSBI.unaryMinus(v)) }));
+    slices = slices.map((sl) => sliceScale(sl, JSBI.unaryMinus(ONE)));
   }
   if (JSBI.equal(den, ONE)) return den === s.den ? s : { ...s, den, slices };
   let g = den;
@@ -107,7 +107,7 @@ export function monomialSeries(r: Rational, x: Rational, e: number, exactTo: Rat
 }
 
 /** The coefficient of q^x ζ^(e/2); throws when x is past exactTo. */
-export function coefficientAt(s: QZSeries, x: Rational, e: number): Rational {
+export function coefficientAt(s: QZSeries, x: Rational, e: number | readonly number[]): Rational {
   if (rcmp(x, s.exactTo) > 0) throw new RangeError('coefficient asked past the q-order the series is exact to');
   const t = rmul(rsub(x, s.start), rat(s.qDen));
   if (!JSBI.equal(t.den, ONE) || sign(t.num) < 0) return rational(ZERO);
@@ -143,7 +143,7 @@ export function truncateSeries(s: QZSeries, X: Rational): QZSeries {
 /** Number of stored coefficients (non-zero or inside a dense run). */
 export function storedTerms(s: QZSeries): number {
   let n = 0;
-  for (const sl of s.slices) n += sl.c.length;
+  for (const sl of s.slices) n += isSparse(sl) ? sl.vals.length : sl.c.length;
   return n;
 }
 

@@ -9,7 +9,7 @@ import {
   rat,
   makeSeries,
   trimSlice,
-  isZero,
+  forEachTerm,
   rational,
   rationalToString,
   sliceExponent,
@@ -62,9 +62,7 @@ export function seriesKey(s: QZSeries): string {
   const terms: string[] = [];
   s.slices.forEach((sl, i) => {
     const x = rationalToString(sliceExponent(s, i));
-    sl.c.forEach((v, k) => {
-      if (!isZero(v)) terms.push(`${x} ${sl.lo + k} ${rationalToString(rational(v, s.den))}`);
-    });
+    forEachTerm(sl, (e, v) => terms.push(`${x} ${e.join(',')} ${rationalToString(rational(v, s.den))}`));
   });
   return `to ${rationalToString(s.exactTo)}: ${terms.join('; ')}`;
 }

@@ -3,7 +3,7 @@ import {
   type QZSeries,
   type Rational,
   coefficientAt,
-  isZero,
+  forEachTerm,
   rat,
   radd,
   rational,
@@ -29,8 +29,8 @@ export function sliceAt(s: QZSeries, x: Rational | number): Record<number, strin
   const xr = typeof x === 'number' ? rat(x) : x;
   const sl = sliceAtExponent(s, xr);
   const out: Record<number, string> = {};
-  sl.c.forEach((v, k) => {
-    if (!isZero(v)) out[sl.lo + k] = rationalToString(rational(v, s.den));
+  forEachTerm(sl, (e, v) => {
+    out[e[0]!] = rationalToString(rational(v, s.den));
   });
   return out;
 }
