@@ -37,8 +37,8 @@ export function assumedMonomial(name: string, value: Monomial, declared: Modular
     quasiReason: null,
     source: numeratorSource(value),
     valuationExact: false,
-    thetaA: null,
-    substitute: (a: number): Monomial => atomMonomial(substitutedAtom(atom, a)),
+    thetaL: null,
+    substitute: (A: readonly (readonly number[])[]): Monomial => atomMonomial(substitutedAtom(atom, A)),
   };
   return atomMonomial(atom);
 }

@@ -23,10 +23,13 @@ export interface Atom {
   readonly source: SeriesSource;
   /** Whether source.valuation is exact (a non-zero lowest slice), not just a bound. */
   readonly valuationExact: boolean;
-  /** a of ϑ(τ, a z) for theta atoms (a ≥ 1); null otherwise. */
-  readonly thetaA: number | null;
-  /** The atom after z ↦ a·z (a = 0 restricts to z = 0). */
-  substitute(a: number): Monomial;
+  /** ℓ of ϑ(τ, ℓ·z) for theta atoms (first non-zero entry positive); null otherwise. */
+  readonly thetaL: readonly number[] | null;
+  /**
+   * The atom after the substitution w = A·z of its variables (A: a row per current
+   * variable, a column per new one; one variable: [[a]] is z ↦ a·z, [[0]] restricts).
+   */
+  substitute(A: readonly (readonly number[])[]): Monomial;
 }
 
 export interface AtomPower {

@@ -17,6 +17,7 @@ import { checkAssertion } from './check-assertion.js';
 import type { CheckOptions } from './check-options.js';
 import type { Outcome } from './outcome.js';
 import { evalCodes } from './diagnostic-codes.js';
+import { latticeProblem } from './lattice-check.js';
 
 type ClaimStatement = Extract<Statement, { kind: 'claim' }>;
 type LetStatement = Extract<Statement, { kind: 'let' }>;
@@ -55,7 +56,8 @@ function defineLet(s: LetStatement, ctx: EvalContext, assumes: Map<string, { typ
   let value = evaluateLetBody(s, letCtx);
   const assumption = assumes.get(s.name);
   if (assumption !== undefined) {
-    value = assumedMonomial(s.name, value, typeFromSpec(assumption.type, ctx.variables.length), ctx.variables.length, assumption.span);
+    const vars = ctx.letVariables.get(s.name) ?? ctx.variables;
+    value = assumedMonomial(s.name, value, typeFromSpec(assumption.type, vars.length, ctx.lattices), vars.length, assumption.span);
     used.add(s.name);
   }
   ctx.lets.set(s.name, value);
@@ -86,6 +88,12 @@ export function checkClaimFile(
   for (const s of ast.statements) if (s.kind === 'assume') assumes.set(s.name, { type: s.type, span: s.span });
   const names = new Map<string, number>();
   for (const s of ast.statements) {
+    if (s.kind === 'lattice') {
+      const problem = latticeProblem(s.gram.rows);
+      if (problem === null) ctx.lattices.set(s.name, s.gram.rows.map((row) => row.map(Number)));
+      else verdicts.push(fileLevelError(ast.file, diagnostic(evalCodes.badLattice, { name: s.name, reason: problem }, s.span)));
+      continue;
+    }
     if (s.kind === 'let') {
       try {
         defineLet(s, ctx, assumes);

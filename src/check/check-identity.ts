@@ -5,9 +5,9 @@
  * assumption (an error, never a proof). Quasi-modular claims are compared to the
  * nominal bound plus `depth` q-steps and are at best unproved.
  */
-import { type Rational, rat, radd, rcmp, rmin, rationalToString, rToNumber, type QZSeries, powerText } from '../series/index.js';
+import { type Rational, rat, radd, rmin, rationalToString, type QZSeries, powerText } from '../series/index.js';
 import type { Expr } from '../lang/ast.js';
-import { type ModularType, typesEqual, typeDifferences, scalarIndexOf, formatIndex, type FormClass } from '../types/index.js';
+import { type ModularType, typesEqual, typeDifferences, type FormClass } from '../types/index.js';
 import type { MismatchRecord, TypeRecord } from '../verdict/index.js';
 import type { Monomial, AtomPower } from './atom.js';
 import { evaluate, type EvalContext } from './evaluate.js';
@@ -15,8 +15,10 @@ import { atomMonomial, monomialText, multiplyMonomials, powerMonomial, ONE_MONOM
 import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
 import { numeratorSource } from './monomial-source.js';
 import { compareTo, type Mismatch } from './compare-series.js';
-import { isIdenticallyZero, boundOfType } from './side-zero.js';
-import { estimateTerms } from './estimate.js';
+import { isIdenticallyZero } from './side-zero.js';
+import { boundFor } from './bound-of-type.js';
+import { estimateTermsForType } from './estimate.js';
+import { zetaNormFor } from './zeta-norm.js';
 import type { CheckOptions } from './check-options.js';
 import type { Outcome } from './outcome.js';
 import { evalCodes } from './diagnostic-codes.js';
@@ -78,17 +80,11 @@ function worstClass(a: FormClass, b: FormClass): FormClass {
   return a === 'meromorphic' || b === 'meromorphic' ? 'meromorphic' : 'modular';
 }
 
-export function boundDerivation(t: ModularType, X: Rational): string {
-  const m = scalarIndexOf(t);
-  const mText = rcmp(m, rat(0)) < 0 ? `max(${formatIndex(t.index)}, 0)` : formatIndex(t.index);
-  return `(K + 2m)/12 with K = ${rationalToString(t.weight)}, m = ${mText}: q-order ${rationalToString(X)} (Theorem A, MATH.md §6)`;
-}
-
 function expandBoth(nf: NormalForm, t: ModularType, X: Rational, opts: CheckOptions): [QZSeries, QZSeries] {
   const ls = numeratorSource(nf.left);
   const rs = numeratorSource(nf.right);
   const v = rmin(ls.valuation, rs.valuation);
-  const estimate = estimateTerms(Math.max(0, rToNumber(scalarIndexOf(t))), v, X);
+  const estimate = estimateTermsForType(t, v, X);
   if (estimate > opts.maxTerms) {
     throw evalError(evalCodes.tooManyTerms, { estimate: Math.ceil(estimate).toExponential(2), limit: opts.maxTerms }, null);
   }
@@ -123,12 +119,11 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
     return { verdict: 'proved', type: claimType, compared, normalForm: normal, reason: 'both sides are the literal 0' };
   }
   if (opts.adjustTypeForTest) tF = opts.adjustTypeForTest(tF);
-  const X = boundOfType(tF);
-  const derivation = boundDerivation(tF, X);
+  const { qOrder: X, derivation, theorem } = boundFor(tF);
   if (quasi) {
     const to = radd(X, rat(opts.depth));
     const [a, b] = expandBoth(nf, tF, to, opts);
-    const c = compareTo(a, b, to);
+    const c = compareTo(a, b, to, zetaNormFor(tF));
     const reasons = [...new Set([...quasiReasons(l), ...quasiReasons(r)])].join('; ');
     if (c.mismatch !== null) {
       return { verdict: 'refuted', type: claimType, compared, normalForm: normal, mismatch: mismatchRecord(c.mismatch), reason: `the expansions differ (${reasons}; compared to the nominal bound plus ${opts.depth} q-steps)` };
@@ -143,18 +138,19 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
   }
   const marginTo = radd(X, rat(opts.margin));
   const [a, b] = expandBoth(nf, tF, marginTo, opts);
-  const c = compareTo(a, b, X);
+  const norm = zetaNormFor(tF);
+  const c = compareTo(a, b, X, norm);
   if (c.mismatch !== null) {
     return { verdict: 'refuted', type: claimType, compared, normalForm: normal, mismatch: mismatchRecord(c.mismatch), reason: 'a coefficient inside the bound differs' };
   }
-  const margin = compareTo(a, b, marginTo);
+  const margin = compareTo(a, b, marginTo, norm);
   if (margin.mismatch !== null) return marginFailure(ctx, margin.mismatch, marginTo);
   return {
     verdict: 'proved',
     type: claimType,
     compared,
     normalForm: normal,
-    bound: { theorem: 'A', qOrder: rationalToString(X), coefficientsChecked: c.compared, derivation, marginTo: rationalToString(marginTo) },
+    bound: { theorem, qOrder: rationalToString(X), coefficientsChecked: c.compared, derivation, marginTo: rationalToString(marginTo) },
   };
 }
 

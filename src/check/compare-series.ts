@@ -32,12 +32,14 @@ export interface Comparison {
   readonly compared: number;
 }
 
-/** The norm that orders ζ-exponents within a q-slice; exponents given in halves. */
-export type ZetaNorm = (halves: readonly number[]) => Rational;
+/**
+ * The norm that orders ζ-exponents within a q-slice, as an exact integer key (a fixed
+ * positive multiple of the norm); exponents given in halves.
+ */
+export type ZetaNorm = (halves: readonly number[]) => number;
 
 /** One variable: |ℓ|; several variables without an index: ℓᵀℓ. */
-export const defaultZetaNorm: ZetaNorm = (e) =>
-  e.length === 1 ? rat(Math.abs(e[0]!), 2) : rat(e.reduce((s, x) => s + x * x, 0), 4);
+export const defaultZetaNorm: ZetaNorm = (e) => (e.length === 1 ? Math.abs(e[0]!) : e.reduce((s, x) => s + x * x, 0));
 
 function lexCompare(x: readonly number[], y: readonly number[]): number {
   for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
@@ -66,10 +68,10 @@ export function compareTo(left: QZSeries, right: QZSeries, X: Rational, norm: Ze
   nonZeroPositions(b, positions);
   for (let i = 0; i < d.slices.length; i++) {
     let best: readonly number[] | null = null;
-    let bestNorm: Rational | null = null;
+    let bestNorm = 0;
     forEachTerm(d.slices[i]!, (e) => {
       const n = norm(e);
-      const c = bestNorm === null ? -1 : rcmp(n, bestNorm) || lexCompare(e, best!);
+      const c = best === null ? -1 : n - bestNorm || lexCompare(e, best);
       if (c < 0) {
         best = e;
         bestNorm = n;

@@ -32,8 +32,8 @@ export function derivativeMonomial(op: 'Dq' | 'Dz', m: Monomial, nvars: number, 
     quasiReason: [reason, ...quasiReasons(m)].join('; '),
     source: mapSource(base, op === 'Dq' ? derivativeQ : derivativeZeta),
     valuationExact: false,
-    thetaA: null,
-    substitute: (a: number): Monomial => atomMonomial(substitutedAtom(atom, a)),
+    thetaL: null,
+    substitute: (A: readonly (readonly number[])[]): Monomial => atomMonomial(substitutedAtom(atom, A)),
   };
   return atomMonomial(atom);
 }

@@ -9,8 +9,8 @@ import type { Monomial } from './atom.js';
 import { evaluate, type EvalContext } from './evaluate.js';
 import { monomialText, isZeroMonomial } from './monomial.js';
 import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
-import { numeratorAndDenominator, boundOfType } from './side-zero.js';
-import { boundDerivation } from './check-identity.js';
+import { numeratorAndDenominator } from './side-zero.js';
+import { boundFor } from './bound-of-type.js';
 
 export interface TypeDescription {
   readonly value: Monomial;
@@ -94,8 +94,9 @@ export function describeType(expr: Expr, ctx: EvalContext): TypeDescription {
   let derivation: string | null = null;
   if (!isZeroMonomial(value) && type !== null) {
     const t = parts.denominator.length > 0 ? monomialType(numeratorAndDenominator(value).N, nvars)! : type;
-    bound = boundOfType(t);
-    derivation = boundDerivation(t, bound);
+    const b = boundFor(t);
+    bound = b.qOrder;
+    derivation = b.derivation;
   }
   return {
     value,

@@ -31,5 +31,10 @@ export const evalCodes = {
   assumeMeromorphic: error('SC-E014', "assume {name}: the definition has the divisor {denominator}; assume needs a holomorphic one"),
   duplicateClaim: error('SC-E015', "a claim named '{name}' already exists in this file (line {line})"),
   operatorPrecondition: error('SC-E016', '{op} needs {condition}; its input has {type} (MATH.md §7)'),
+  oneVariableOnly: error('SC-E017', '{what} needs one variable; this file has {variables}: substitute a linear form, e.g. phi_{0,1}(z1)'),
+  wrongArity: error('SC-E018', 'the substitution needs {expected} linear form(s), found {found}'),
+  badLattice: error('SC-E019', "lattice {name}: {reason}"),
+  noBound: error('SC-E020', 'no bound for index {index}: {detail}'),
+  indexSize: error('SC-E021', 'the index has size {size}, but the expression has {nvars} variable(s)'),
   internal: error('SC-E999', 'internal error: {detail}; please report it with the claim text'),
 } as const;

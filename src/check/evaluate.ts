@@ -22,8 +22,9 @@ import { substituteMonomial } from './substitute-monomial.js';
 import { derivativeMonomial } from './derivative-atom.js';
 import { serreMonomial, heatMonomial, taylorMonomial, bracketMonomial, heckeVMonomial, heckeTMonomial } from './operator-atom.js';
 import { assertDivisorNonZero } from './nonzero.js';
+import { latticeThetaAtom } from './lattice-atom.js';
 import {
-  ETA_ATOM,
+  etaAtom,
   deltaMonomial,
   eisensteinAtom,
   jacobiEisensteinAtom,
@@ -41,6 +42,10 @@ export interface EvalContext {
   readonly lets: Map<string, Monomial>;
   /** Definitions whose evaluation failed, with the reason. */
   readonly failedLets: Map<string, string>;
+  /** The variables of each definition (its parameters, or the file's variables). */
+  readonly letVariables: Map<string, readonly string[]>;
+  /** Declared lattices: their even Gram matrices. */
+  readonly lattices: Map<string, readonly (readonly number[])[]>;
   /** The `assume`d names each definition depends on. */
   readonly letAssumptions: Map<string, ReadonlySet<string>>;
   /** Filled while evaluating: the assumptions the value relies on. */
@@ -57,6 +62,8 @@ export function newEvalContext(text: string, variables: readonly string[], depth
     variables,
     lets: new Map(),
     failedLets: new Map(),
+    letVariables: new Map(),
+    lattices: new Map(),
     letAssumptions: new Map(),
     usedAssumptions: new Set(),
     checkedDivisors: new Set(),
@@ -68,17 +75,15 @@ function textOf(ctx: EvalContext, span: Span): string {
   return ctx.text.slice(span.startOffset, span.endOffset).replace(/\s+/g, ' ').trim();
 }
 
-function oneVariable(ctx: EvalContext, span: Span): void {
+function oneVariable(ctx: EvalContext, span: Span, what: string): void {
   if (ctx.variables.length !== 1) {
-    throw evalError(evalCodes.notYetSupported, { what: 'a file with several variables' }, span);
+    throw evalError(evalCodes.oneVariableOnly, { what, variables: ctx.variables.join(', ') }, span);
   }
 }
 
-/** The integer a of a one-variable linear form a·z (the parser allows only the variables in scope). */
-function linearCoefficient(l: LinearForm): number {
-  let a = 0;
-  for (const c of Object.values(l.coeffs)) a += c;
-  return a;
+/** The coefficient vector of a linear form over the variables in scope. */
+function linearVector(l: LinearForm, variables: readonly string[]): number[] {
+  return variables.map((v) => l.coeffs[v] ?? 0);
 }
 
 function checkDivisors(m: Monomial, ctx: EvalContext, span: Span): Monomial {
@@ -97,7 +102,7 @@ function atom(a: Atom): Monomial {
 }
 
 export function evaluate(e: Expr, ctx: EvalContext): Monomial {
-  oneVariable(ctx, e.span);
+  const n = ctx.variables.length;
   switch (e.kind) {
     case 'number':
       return constantMonomial(rational(intFromString(e.value)));
@@ -112,28 +117,26 @@ export function evaluate(e: Expr, ctx: EvalContext): Monomial {
       return k < 0 ? checkDivisors(powerMonomial(base, k), ctx, e.span) : powerMonomial(base, k);
     }
     case 'eta':
-      return atom(ETA_ATOM);
+      return atom(etaAtom(n));
     case 'delta':
-      return deltaMonomial();
+      return deltaMonomial(n);
     case 'eisenstein':
-      return atom(eisensteinAtom(e.weight));
+      return atom(eisensteinAtom(e.weight, n));
     case 'jacobiEisenstein':
-      oneVariable(ctx, e.span);
+      oneVariable(ctx, e.span, `E_{${e.weight},1} without arguments`);
       return atom(jacobiEisensteinAtom(e.weight));
     case 'namedForm':
-      oneVariable(ctx, e.span);
+      oneVariable(ctx, e.span, `${e.name} without arguments`);
       return atom(namedFormAtom(e.name));
     case 'theta':
-      oneVariable(ctx, e.span);
-      return thetaMonomial(linearCoefficient(e.arg));
+      return thetaMonomial(linearVector(e.arg, ctx.variables));
     case 'wp': {
-      oneVariable(ctx, e.span);
-      const m = wpMonomial(linearCoefficient(e.arg));
+      const m = wpMonomial(linearVector(e.arg, ctx.variables));
       if (m === null) throw evalError(evalCodes.divisionByZero, { what: 'theta(0)^2, the denominator of wp(0),' }, e.span);
       return m;
     }
     case 'latticeTheta':
-      throw evalError(evalCodes.notYetSupported, { what: 'the lattice theta series Theta[…]' }, e.span);
+      return evaluateLatticeTheta(e.lattice, e.args, e.allZero, e.span, ctx);
     case 'ref': {
       const failed = ctx.failedLets.get(e.name);
       if (failed !== undefined) throw evalError(evalCodes.failedDefinition, { name: e.name, reason: failed }, e.span);
@@ -146,20 +149,22 @@ export function evaluate(e: Expr, ctx: EvalContext): Monomial {
       return evaluateSubstitution(e.target, e.args, e.allZero, e.span, ctx);
     case 'hecke': {
       const f = evaluate(e.arg, ctx);
-      const n = ctx.variables.length;
-      if (e.op === 'U') return checkDivisors(substituteMonomial(f, e.level, e.span), ctx, e.span);
+      if (e.op === 'U') {
+        oneVariable(ctx, e.span, `U_${e.level}`);
+        return checkDivisors(substituteMonomial(f, [[e.level]], e.span), ctx, e.span);
+      }
       return e.op === 'V' ? heckeVMonomial(f, e.level, n, e.span) : heckeTMonomial(f, e.level, n, e.span);
     }
     case 'derivative': {
       const f = evaluate(e.arg, ctx);
-      const n = ctx.variables.length;
+      if (e.op === 'Dz') oneVariable(ctx, e.span, 'Dz');
       if (e.op === 'Dq' || e.op === 'Dz') return derivativeMonomial(e.op, f, n, e.span);
       return e.op === 'heat' ? heatMonomial(f, n, e.span) : serreMonomial(f, n, e.span);
     }
     case 'taylor':
-      return taylorMonomial(evaluate(e.arg, ctx), e.order, ctx.variables.length, e.span);
+      return taylorMonomial(evaluate(e.arg, ctx), e.order, n, e.span);
     case 'bracket':
-      return bracketMonomial(evaluate(e.left, ctx), evaluate(e.right, ctx), e.order, ctx.variables.length, e.span);
+      return bracketMonomial(evaluate(e.left, ctx), evaluate(e.right, ctx), e.order, n, e.span);
   }
 }
 
@@ -185,6 +190,20 @@ function evaluateBinary(op: '+' | '-' | '*' | '/', left: Expr, right: Expr, span
   }
 }
 
+/** The variables a substitution target is written in: a definition's own, or one for a built-in. */
+function targetVariables(target: Expr, ctx: EvalContext): readonly string[] {
+  return target.kind === 'ref' ? (ctx.letVariables.get(target.name) ?? ctx.variables) : ['w'];
+}
+
+/** The matrix of w = A·z: a row per target variable, a column per variable in scope. */
+function substitutionMatrix(args: readonly LinearForm[], allZero: boolean, arity: number, span: Span, ctx: EvalContext): number[][] {
+  if (allZero) return Array.from({ length: arity }, () => ctx.variables.map(() => 0));
+  if (args.length !== arity) {
+    throw evalError(evalCodes.wrongArity, { expected: arity, found: args.length }, span);
+  }
+  return args.map((l) => linearVector(l, ctx.variables));
+}
+
 function evaluateSubstitution(
   target: Expr,
   args: readonly LinearForm[],
@@ -192,19 +211,32 @@ function evaluateSubstitution(
   span: Span,
   ctx: EvalContext,
 ): Monomial {
-  oneVariable(ctx, span);
-  if (!allZero && args.length !== 1) {
-    throw evalError(evalCodes.notYetSupported, { what: 'substitution of several linear forms' }, span);
-  }
-  const a = allZero ? 0 : linearCoefficient(args[0]!);
-  const m = substituteMonomial(evaluate(target, ctx), a, span);
-  return checkDivisors(m, ctx, span);
+  const vars = targetVariables(target, ctx);
+  const A = substitutionMatrix(args, allZero, vars.length, span, ctx);
+  const inner = evaluate(target, { ...ctx, variables: vars });
+  return checkDivisors(substituteMonomial(inner, A, span), ctx, span);
 }
 
-/** Evaluates the body of a `let` (one parameter at most, for now). */
-export function evaluateLetBody(s: Extract<Statement, { kind: 'let' }>, ctx: EvalContext): Monomial {
-  if (s.params !== null && s.params.length > 1) {
-    throw evalError(evalCodes.notYetSupported, { what: 'a definition with several parameters' }, s.span);
+function evaluateLatticeTheta(
+  name: string,
+  args: readonly LinearForm[],
+  allZero: boolean,
+  span: Span,
+  ctx: EvalContext,
+): Monomial {
+  const G = ctx.lattices.get(name);
+  if (G === undefined) throw evalError(evalCodes.internal, { detail: `unresolved lattice ${name}` }, span);
+  const base = atomMonomial(latticeThetaAtom(name, G));
+  if (!allZero && args.length === 0) {
+    if (ctx.variables.length !== G.length) throw evalError(evalCodes.wrongArity, { expected: G.length, found: ctx.variables.length }, span);
+    return base;
   }
-  return evaluate(s.body, s.params === null ? ctx : { ...ctx, variables: s.params });
+  return substituteMonomial(base, substitutionMatrix(args, allZero, G.length, span, ctx), span);
+}
+
+/** Evaluates the body of a `let` in its own variables (its parameters, or the file's). */
+export function evaluateLetBody(s: Extract<Statement, { kind: 'let' }>, ctx: EvalContext): Monomial {
+  const variables = s.params ?? ctx.variables;
+  ctx.letVariables.set(s.name, variables);
+  return evaluate(s.body, { ...ctx, variables });
 }

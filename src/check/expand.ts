@@ -11,16 +11,17 @@ import {
   rcmp,
   leadingExponent,
   truncateSeries,
-  rToNumber,
   zeroSeries,
 } from '../series/index.js';
 import type { Span } from '../lang/span.js';
-import { type FormClass, type ModularType, scalarIndexOf, constantType } from '../types/index.js';
+import { type FormClass, type ModularType, constantType } from '../types/index.js';
 import type { Monomial } from './atom.js';
 import { isZeroMonomial, monomialText, ONE_MONOMIAL, multiplyMonomials, powerMonomial, atomMonomial } from './monomial.js';
 import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
 import { numeratorSource } from './monomial-source.js';
-import { estimateTerms } from './estimate.js';
+import { estimateTermsForType } from './estimate.js';
+import { zetaNormFor } from './zeta-norm.js';
+import type { ZetaNorm } from './compare-series.js';
 import { evalCodes } from './diagnostic-codes.js';
 import { evalError } from './eval-error.js';
 
@@ -34,6 +35,8 @@ export interface Expansion {
   /** The expression (or its numerator N) to qOrder. */
   readonly series: QZSeries;
   readonly qOrder: Rational;
+  /** The order of ζ-exponents for output (CLAIMS.md). */
+  readonly norm: ZetaNorm;
 }
 
 export const DEFAULT_STEPS_PAST_LEADING = 5;
@@ -51,15 +54,15 @@ export function expandMonomial(m: Monomial, nvars: number, to: Rational | null, 
   const cls = monomialClass(m);
   const Q = denominatorMonomial(m);
   const N = Q === null ? m : multiplyMonomials(m, Q);
-  const base = { type, cls, quasiReasons: quasiReasons(m), denominator: Q === null ? null : monomialText(Q) };
+  const base = { type, cls, quasiReasons: quasiReasons(m), denominator: Q === null ? null : monomialText(Q), norm: zetaNormFor(type) };
   if (isZeroMonomial(m)) {
     const X = to ?? rat(DEFAULT_STEPS_PAST_LEADING);
     return { ...base, series: zeroSeries(X, X), qOrder: X };
   }
   const src = numeratorSource(N);
-  const index = rToNumber(scalarIndexOf(monomialType(N, nvars) ?? constantType(nvars)));
+  const numeratorType = monomialType(N, nvars) ?? constantType(nvars);
   const guard = (X: Rational): void => {
-    const estimate = estimateTerms(index, src.valuation, X);
+    const estimate = estimateTermsForType(numeratorType, src.valuation, X);
     if (estimate > maxTerms) {
       throw evalError(evalCodes.tooManyTerms, { estimate: Math.ceil(estimate).toExponential(2), limit: maxTerms }, span);
     }

@@ -9,5 +9,5 @@ export { type CheckOptions, DEFAULT_CHECK_OPTIONS } from './check-options.js';
 export { typeRecord } from './type-record.js';
 export { describeType, type TypeDescription } from './describe-type.js';
 export { boundOfType } from './side-zero.js';
-export { boundDerivation } from './check-identity.js';
+export { boundFor, type TypeBound } from './bound-of-type.js';
 export { compareTo, defaultZetaNorm, type ZetaNorm, type Mismatch } from './compare-series.js';

@@ -4,7 +4,15 @@
  * division), the remaining numerator factors, and the denominator — every other
  * non-unit with a negative exponent, which makes the expression meromorphic.
  */
-import { type ModularType, type FormClass, constantType, typeProduct, typePower, thetaQuotientHolomorphic } from '../types/index.js';
+import {
+  type ModularType,
+  type FormClass,
+  constantType,
+  typeProduct,
+  typePower,
+  thetaQuotientHolomorphic,
+  thetaQuotientHolomorphicMulti,
+} from '../types/index.js';
 import type { AtomPower, Monomial } from './atom.js';
 import { sortedFactors } from './monomial.js';
 
@@ -18,6 +26,14 @@ export interface MonomialParts {
   readonly denominator: readonly AtomPower[];
 }
 
+/** The divisor rule of MATH.md §3: one variable directly, several by primitive direction. */
+function thetaBlockIsHolomorphic(thetas: readonly AtomPower[]): boolean {
+  const oneVariable = thetas.every((p) => p.atom.thetaL!.length === 1);
+  return oneVariable
+    ? thetaQuotientHolomorphic(thetas.map((p) => ({ a: p.atom.thetaL![0]!, exponent: p.exponent }))).holomorphic
+    : thetaQuotientHolomorphicMulti(thetas.map((p) => ({ l: p.atom.thetaL!, exponent: p.exponent }))).holomorphic;
+}
+
 export function splitMonomial(m: Monomial): MonomialParts {
   const units: AtomPower[] = [];
   const thetas: AtomPower[] = [];
@@ -28,8 +44,7 @@ export function splitMonomial(m: Monomial): MonomialParts {
     else others.push(p);
   }
   const hasThetaDivisor = thetas.some((p) => p.exponent < 0);
-  const block =
-    hasThetaDivisor && thetaQuotientHolomorphic(thetas.map((p) => ({ a: p.atom.thetaA!, exponent: p.exponent }))).holomorphic;
+  const block = hasThetaDivisor && thetaBlockIsHolomorphic(thetas);
   const rest = block ? others : [...thetas, ...others];
   return {
     units,

@@ -54,8 +54,8 @@ function operatorAtom(key: string, type: ModularType, inputs: readonly Input[], 
     quasiReason: quasi ? [`${opName} of a quasi-modular input has no proven type (MATH.md §5)`, ...reasons].join('; ') : null,
     source,
     valuationExact: false,
-    thetaA: null,
-    substitute: (a: number): Monomial => atomMonomial(substitutedAtom(atom, a)),
+    thetaL: null,
+    substitute: (A: readonly (readonly number[])[]): Monomial => atomMonomial(substitutedAtom(atom, A)),
   };
   return atomMonomial(atom);
 }

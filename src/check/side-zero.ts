@@ -3,9 +3,9 @@
  * §4, item 3): a function of proven type T vanishes iff its coefficients vanish up to
  * the Theorem A bound of T. For N/Q it is N that is tested.
  */
-import { rat, rcmp, isZeroSeries, rmax, type Rational } from '../series/index.js';
-import { scalarIndexOf, type ModularType } from '../types/index.js';
-import { theoremABound } from '../bound/index.js';
+import { rcmp, isZeroSeries, type Rational } from '../series/index.js';
+import type { ModularType } from '../types/index.js';
+import { boundFor } from './bound-of-type.js';
 import type { Monomial } from './atom.js';
 import { isZeroMonomial, multiplyMonomials, powerMonomial, atomMonomial, ONE_MONOMIAL } from './monomial.js';
 import { splitMonomial, monomialType } from './monomial-parts.js';
@@ -18,9 +18,9 @@ export function numeratorAndDenominator(m: Monomial): { N: Monomial; Q: Monomial
   return { N: multiplyMonomials(m, Q), Q };
 }
 
-/** The Theorem A bound of a type, with a non-negative index as the proof needs. */
+/** The q-order to which a function of this type must be compared (Theorem A or B). */
 export function boundOfType(t: ModularType): Rational {
-  return theoremABound(t.weight, rmax(scalarIndexOf(t), rat(0)));
+  return boundFor(t).qOrder;
 }
 
 export function isIdenticallyZero(m: Monomial, nvars: number): boolean {

@@ -93,11 +93,11 @@ function sumAtom(numerators: readonly Monomial[], nvars: number): Atom {
     quasiReason: reasons.length > 0 ? reasons.join('; ') : null,
     source: { valuation: v, expand: (X) => summed.expand(X) },
     valuationExact: false,
-    thetaA: null,
-    substitute: (a: number): Monomial =>
+    thetaL: null,
+    substitute: (A: readonly (readonly number[])[]): Monomial =>
       sumMonomials(
-        sorted.map((m) => ({ monomial: substituteMonomial(m, a, null), text: monomialText(m) })),
-        nvars,
+        sorted.map((m) => ({ monomial: substituteMonomial(m, A, null), text: monomialText(m) })),
+        A[0]!.length,
         null,
       ),
   };

@@ -11,7 +11,11 @@ function literal(text: string): Rational {
   return r;
 }
 
-export function typeFromSpec(spec: TypeSpec, nvars: number): ModularType {
+export function typeFromSpec(
+  spec: TypeSpec,
+  nvars: number,
+  lattices: ReadonlyMap<string, readonly (readonly number[])[]> = new Map(),
+): ModularType {
   const weight = literal(spec.weight);
   let index: Rational[][];
   switch (spec.index.kind) {
@@ -24,11 +28,15 @@ export function typeFromSpec(spec: TypeSpec, nvars: number): ModularType {
     case 'latticeMatrix':
       index = spec.index.gram.rows.map((row) => row.map((x) => rdiv(literal(x), rat(2))));
       break;
-    case 'latticeName':
-      throw evalError(evalCodes.notYetSupported, { what: 'lattice indices' }, spec.index.span);
+    case 'latticeName': {
+      const G = lattices.get(spec.index.name);
+      if (G === undefined) throw evalError(evalCodes.internal, { detail: `unresolved lattice ${spec.index.name}` }, spec.index.span);
+      index = G.map((row) => row.map((x) => rat(x, 2)));
+      break;
+    }
   }
   if (index.length !== nvars) {
-    throw evalError(evalCodes.notYetSupported, { what: `an index of size ${index.length} in a file with ${nvars} variable(s)` }, spec.span);
+    throw evalError(evalCodes.indexSize, { size: index.length, nvars }, spec.span);
   }
   const t: ModularType = { weight, index, etaPower: mod(spec.character ?? 0, 24) };
   if (!isConsistent(t)) throw evalError(evalCodes.inconsistentType, { type: formatType(t) }, spec.span);

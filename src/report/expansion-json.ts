@@ -18,7 +18,7 @@ export function expansionJson(expression: string, e: Expansion): ExpansionJson {
     expression,
     type: typeJson(e.type, e.cls),
     qOrder: rationalToString(e.qOrder),
-    terms: expansionTerms(e.series).map((t) => ({
+    terms: expansionTerms(e.series, e.norm).map((t) => ({
       q: rationalToString(t.q),
       zeta: t.zetaHalves.map((h) => rationalToString(zetaExponent(h))),
       c: rationalToString(t.c),

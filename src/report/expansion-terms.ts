@@ -3,7 +3,7 @@
  * by q-exponent, then by the ζ-norm (|ℓ| for one variable, ℓᵀM⁻¹ℓ for several), then
  * lexicographically.
  */
-import { type QZSeries, type Rational, rational, rcmp, sliceExponent, forEachTerm } from '../series/index.js';
+import { type QZSeries, type Rational, rational, sliceExponent, forEachTerm } from '../series/index.js';
 import { type ZetaNorm, defaultZetaNorm } from '../check/index.js';
 
 export interface ExpansionTerm {
@@ -23,7 +23,9 @@ export function sliceTerms(s: QZSeries, i: number, norm: ZetaNorm = defaultZetaN
   const q = sliceExponent(s, i);
   const out: ExpansionTerm[] = [];
   forEachTerm(s.slices[i]!, (e, v) => out.push({ q, zetaHalves: e, c: rational(v, s.den) }));
-  return out.sort((a, b) => rcmp(norm(a.zetaHalves), norm(b.zetaHalves)) || lexCompare(a.zetaHalves, b.zetaHalves));
+  const keyed = out.map((t) => ({ t, n: norm(t.zetaHalves) }));
+  keyed.sort((a, b) => a.n - b.n || lexCompare(a.t.zetaHalves, b.t.zetaHalves));
+  return keyed.map((k) => k.t);
 }
 
 export function expansionTerms(s: QZSeries, norm: ZetaNorm = defaultZetaNorm): ExpansionTerm[] {

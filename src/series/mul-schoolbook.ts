@@ -10,12 +10,12 @@ import {
   dense,
   sliceIsZero,
   sliceHi,
-  sliceMultiply,
-  sliceCombine,
+  forEachTerm,
   sliceMultiplyInto,
   trimSlice,
 } from './slice.js';
 import { planProduct } from './product-plan.js';
+import { SparseAccumulator } from './sparse-accumulator.js';
 
 export function mulSchoolbook(x: QZSeries, y: QZSeries): QZSeries {
   if (x.nvars > 1) return mulSchoolbookSparse(x, y);
@@ -49,17 +49,35 @@ export function mulSchoolbook(x: QZSeries, y: QZSeries): QZSeries {
   return makeSeries(start, qDen, JSBI.multiply(a.den, b.den), slices, exactTo, a.nvars);
 }
 
-/** Several variables: the same double loop over slices with sparse slice products. */
+/** The largest |exponent| in any coordinate over the first `count` slices. */
+function maxAbsExponent(s: QZSeries, count: number): number {
+  let m = 0;
+  for (let i = 0; i < Math.min(count, s.slices.length); i++) forEachTerm(s.slices[i]!, (e) => e.forEach((x) => (m = Math.max(m, Math.abs(x)))));
+  return m;
+}
+
+/** Several variables: the same double loop over slices, accumulating sparse products. */
 function mulSchoolbookSparse(x: QZSeries, y: QZSeries): QZSeries {
   const { a, b, start, qDen, exactTo, count } = planProduct(x, y);
-  const acc: Slice[] = new Array<Slice>(count).fill(EMPTY_SLICE);
+  const maxAbs = maxAbsExponent(a, count) + maxAbsExponent(b, count);
+  const acc: (SparseAccumulator | null)[] = new Array<SparseAccumulator | null>(count).fill(null);
   for (let i = 0; i < Math.min(a.slices.length, count); i++) {
     const ai = a.slices[i]!;
     if (sliceIsZero(ai)) continue;
     for (let j = 0; j < b.slices.length && i + j < count; j++) {
       const bj = b.slices[j]!;
-      if (!sliceIsZero(bj)) acc[i + j] = sliceCombine(acc[i + j]!, null, sliceMultiply(ai, bj), null);
+      if (sliceIsZero(bj)) continue;
+      const target = (acc[i + j] ??= new SparseAccumulator(a.nvars, maxAbs));
+      forEachTerm(ai, (ea, va) =>
+        forEachTerm(bj, (eb, vb) =>
+          target.add(
+            ea.map((t, k) => t + eb[k]!),
+            JSBI.multiply(va, vb),
+          ),
+        ),
+      );
     }
   }
-  return makeSeries(start, qDen, JSBI.multiply(a.den, b.den), acc, exactTo, a.nvars);
+  const slices: Slice[] = acc.map((t) => (t === null ? EMPTY_SLICE : t.toSlice()));
+  return makeSeries(start, qDen, JSBI.multiply(a.den, b.den), slices, exactTo, a.nvars);
 }

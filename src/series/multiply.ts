@@ -32,6 +32,8 @@ export function chooseMulAlgorithm(x: QZSeries, y: QZSeries): { algorithm: MulAl
 
 export function multiplySeries(x: QZSeries, y: QZSeries): QZSeries {
   if (x.nvars !== y.nvars) throw new RangeError('internal: multiplying series in different variables');
+  // Several variables: sparse slices, whose products are the schoolbook ones.
+  if (x.nvars > 1) return mulSchoolbook(x, y);
   const { algorithm, sparseFirst } = chooseMulAlgorithm(x, y);
   switch (algorithm) {
     case 'sparse-dense':

@@ -13,7 +13,20 @@
 import { JSBI, type Int, ONE, int, isZero } from './integer.js';
 import { type Rational, rational, radd, rmul, rdiv, rpow, rat, rIsZero } from './rational.js';
 import { type QZSeries, makeSeries, sliceCountTo, leadingExponent } from './qz-series.js';
-import { type Slice, type DenseSlice, EMPTY_SLICE, dense, sliceIsZero, sliceWeight, sliceMultiply, sliceCombine, trimSlice } from './slice.js';
+import {
+  type Slice,
+  type DenseSlice,
+  EMPTY_SLICE,
+  dense,
+  forEachTerm,
+  sliceIsZero,
+  sliceWeight,
+  sliceMultiply,
+  sliceCombine,
+  sliceScale,
+  sliceShift,
+  sliceDivideBy,
+} from './slice.js';
 import { rsub } from './rational.js';
 import { shiftSeries } from './shift.js';
 import { slicesFromRationalRows } from './rational-rows.js';
@@ -23,7 +36,14 @@ export function hasMonomialLead(f: QZSeries): boolean {
   const v = leadingExponent(f);
   if (v === null) return false;
   const i = f.slices.findIndex((s) => !sliceIsZero(s));
-  return f.nvars === 1 && sliceWeight(f.slices[i]!) === 1;
+  return sliceWeight(f.slices[i]!) === 1;
+}
+
+/** The single term c·ζ^e of a monomial slice. */
+function monomialTerm(s: Slice): { e: readonly number[]; c: Int } {
+  let out: { e: readonly number[]; c: Int } | null = null;
+  forEachTerm(s, (e, c) => (out = { e, c }));
+  return out!;
 }
 
 /** f^k for an integer k by Miller's recurrence; f must have a monomial lowest slice. */
@@ -32,12 +52,13 @@ export function powerMiller(f: QZSeries, k: number): QZSeries {
   if (v === null || !hasMonomialLead(f)) throw new RangeError('internal: Miller recurrence needs a monomial leading slice');
   const lead = f.slices.findIndex((s) => !sliceIsZero(s));
   // g = f / q^v has a_0 as its slice 0; f^k = q^(kv) · g^k, and g^k is exact as far as g is.
-  const a = f.slices.slice(lead).map(dense);
+  const a = f.slices.slice(lead);
   const X = rsub(f.exactTo, v);
   const n = sliceCountTo(rat(0), f.qDen, X);
-  const a0 = a[0]!;
-  const fast = JSBI.equal(f.den, ONE) && (JSBI.equal(a0.c[0]!, ONE) || JSBI.equal(a0.c[0]!, int(-1)));
-  const h = fast ? millerIntegral(a, a0, k, n) : millerRational(a, f.den, k, n);
+  const a0 = monomialTerm(a[0]!);
+  const fast = JSBI.equal(f.den, ONE) && JSBI.equal(JSBI.multiply(a0.c, a0.c), ONE);
+  if (!fast && f.nvars > 1) throw new RangeError('internal: Miller recurrence over rationals needs one variable');
+  const h = fast ? millerIntegral(a, a0, k, n) : millerRational(a.map(dense), f.den, k, n);
   return shiftSeries(makeSeries(rat(0), f.qDen, h.den, h.slices, X, f.nvars), rmul(v, rat(k)));
 }
 
@@ -46,12 +67,13 @@ interface Numerators {
   readonly slices: Slice[];
 }
 
-function millerIntegral(a: readonly DenseSlice[], a0: DenseSlice, k: number, n: number): Numerators {
-  const sgn = JSBI.equal(a0.c[0]!, ONE) ? 1 : -1;
-  const e0 = a0.lo;
+/** The integral recurrence, on slices of any number of variables. */
+function millerIntegral(a: readonly Slice[], a0: { e: readonly number[]; c: Int }, k: number, n: number): Numerators {
   const h: Slice[] = new Array<Slice>(n).fill(EMPTY_SLICE);
   if (n === 0) return { den: ONE, slices: h };
-  h[0] = { lo: e0 * k, c: [sgn === 1 || k % 2 === 0 ? ONE : int(-1)] };
+  const c0k = JSBI.equal(a0.c, ONE) || k % 2 === 0 ? ONE : int(-1);
+  h[0] = sliceShift(sliceIsZero(a[0]!) ? a[0]! : sliceScale(sliceDivideBy(a[0]!, a0.c), c0k), a0.e.map((x) => x * (k - 1)));
+  const minusE0 = a0.e.map((x) => -x);
   const support: number[] = [];
   for (let j = 1; j < Math.min(n, a.length); j++) if (!sliceIsZero(a[j]!)) support.push(j);
   for (let m = 1; m < n; m++) {
@@ -62,14 +84,11 @@ function millerIntegral(a: readonly DenseSlice[], a0: DenseSlice, k: number, n: 
       if (w === 0 || sliceIsZero(h[m - j]!)) continue;
       acc = sliceCombine(acc, null, sliceMultiply(a[j]!, h[m - j]!), int(w));
     }
-    const divisor = int(m * sgn);
-    const d = dense(acc);
-    const c = d.c.map((x) => {
-      const qt = JSBI.divide(x, divisor);
-      if (!JSBI.equal(JSBI.multiply(qt, divisor), x)) throw new RangeError('internal: inexact Miller step');
-      return qt;
+    const divisor = JSBI.multiply(int(m), a0.c);
+    forEachTerm(acc, (_e, x) => {
+      if (!JSBI.equal(JSBI.multiply(JSBI.divide(x, divisor), divisor), x)) throw new RangeError('internal: inexact Miller step');
     });
-    h[m] = trimSlice(d.lo - e0, c);
+    h[m] = sliceShift(sliceDivideBy(acc, divisor), minusE0);
   }
   return { den: ONE, slices: h };
 }

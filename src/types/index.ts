@@ -4,3 +4,6 @@ export * from './building-blocks.js';
 export * from './divisor-rule.js';
 export * from './holomorphy.js';
 export * from './theta-block-order.js';
+export * from './matrix.js';
+export * from './holomorphy-matrix.js';
+export * from './divisor-rule-multi.js';
