@@ -119,7 +119,7 @@ function offendingRecord(o: Offending): MismatchRecord {
 }
 
 function why(p: Holomorphy, nvars: number): string {
-  if (p === 'weak') return 'a negative q-exponent';
+  if (p === 'weak') return 'a coefficient with a negative q-exponent';
   const disc = nvars === 1 ? '4mx − r²' : 'x − ¼ℓᵀM⁻¹ℓ';
   return `a coefficient with ${disc} ${p === 'holomorphic' ? '<' : '≤'} 0`;
 }
