@@ -13,6 +13,7 @@
  * project card prefers JSBI to native bigint); nothing here is on a timed path.
  */
 import JSBI from 'jsbi';
+import { forEachTerm, sliceIsZero } from '../dist/series/index.js';
 
 export const P = JSBI.BigInt('2305843009213693951'); // 2^61 − 1
 const ZERO = JSBI.BigInt(0);
@@ -54,7 +55,7 @@ export function powMod(base, n) {
 }
 
 /**
- * Checksums of a series `{ qDen, den, slices: [{ lo, c: JSBI[] }] }` (a QZSeries).
+ * Checksums of a series (a QZSeries, dense or sparse slices).
  * Returns `{ sum, wsum }` as decimal strings and `leadIndex`, the index of the first
  * non-zero slice (−1 for the zero series). Throws if den ≠ 1 or a non-zero slice
  * lies off the integer-step grid of the leading power.
@@ -64,7 +65,7 @@ export function seriesChecksum(series) {
     throw new Error(`checksum needs integer coefficients, got denominator ${series.den.toString()}`);
   }
   const slices = series.slices;
-  const leadIndex = slices.findIndex((s) => s.c.length > 0);
+  const leadIndex = slices.findIndex((s) => !sliceIsZero(s));
   let sum = ZERO;
   let wsum = ZERO;
   if (leadIndex < 0) return { sum: '0', wsum: '0', leadIndex };
@@ -83,7 +84,7 @@ export function seriesChecksum(series) {
     const s = slices[i];
     const offset = i - leadIndex;
     if (offset % series.qDen !== 0) {
-      if (s.c.length > 0) throw new Error(`non-zero slice ${i} is not an integer number of q-steps past the lead`);
+      if (!sliceIsZero(s)) throw new Error(`non-zero slice ${i} is not an integer number of q-steps past the lead`);
       continue;
     }
     const kHere = offset / series.qDen;
@@ -91,13 +92,12 @@ export function seriesChecksum(series) {
       pow3 = mulMod(pow3, THREE);
       k++;
     }
-    for (let j = 0; j < s.c.length; j++) {
-      const c = s.c[j];
-      if (JSBI.equal(c, ZERO)) continue;
+    // Several variables: e is the sum of the exponent vector's entries (in halves).
+    forEachTerm(s, (e, c) => {
       const r = residue(c);
       sum = addMod(sum, r);
-      wsum = addMod(wsum, mulMod(r, mulMod(pow3, weight5(s.lo + j))));
-    }
+      wsum = addMod(wsum, mulMod(r, mulMod(pow3, weight5(e.reduce((a, b) => a + b, 0)))));
+    });
   }
   return { sum: sum.toString(), wsum: wsum.toString(), leadIndex };
 }

@@ -4,7 +4,7 @@
  * q-power and `steps` the number of integer q-steps past it, so the series is asked
  * for to q-order lead + steps.
  */
-import { rat, radd, powerSource, productSource } from '../dist/series/index.js';
+import { rat, radd, powerSource, productSource, mapSource, substituteLinear } from '../dist/series/index.js';
 import { thetaSource, etaPowerSource } from '../dist/forms/leaves.js';
 import { phiMinus2Source } from '../dist/forms/phi-m2-1.js';
 import { phi0Source } from '../dist/forms/phi-0-1.js';
@@ -47,6 +47,17 @@ export const WORKLOADS = [
     steps: 40,
     build() {
       const src = powerSource(productSource([phiMinus2Source(), phi0Source()]), 6);
+      return expandSteps(src, this.lead, this.steps);
+    },
+  },
+  {
+    name: 'W5',
+    title: 'ϑ(z1)ϑ(z2)…ϑ(z8) in eight variables to q-order 6 (5 steps past q^1)',
+    lead: rat(1),
+    steps: 5,
+    build() {
+      const unit = (i) => Array.from({ length: 8 }, (_, j) => (i === j ? 1 : 0));
+      const src = productSource(Array.from({ length: 8 }, (_, i) => mapSource(thetaSource(1), (s) => substituteLinear(s, [unit(i)]))));
       return expandSteps(src, this.lead, this.steps);
     },
   },
