@@ -19,3 +19,4 @@ export * from './divide-exact.js';
 export * from './series-source.js';
 export * from './rational-rows.js';
 export * from './power-text.js';
+export { polyMultiply, choosePolyAlgorithm } from './poly-multiply.js';

@@ -41,20 +41,27 @@ function sumHalves(lo: readonly Int[], hi: readonly Int[]): Int[] {
   return out;
 }
 
-/** a·b, full product of length |a| + |b| − 1. */
+type PolyProduct = (a: readonly Int[], b: readonly Int[]) => Int[];
+
+/** a·b, full product of length |a| + |b| − 1, Karatsuba all the way down. */
 export function polyMulKaratsuba(a: readonly Int[], b: readonly Int[]): Int[] {
+  return polyMulKaratsubaWith(a, b, polyMulKaratsuba);
+}
+
+/** One Karatsuba split whose three half-size products go to `sub` (the dispatcher). */
+export function polyMulKaratsubaWith(a: readonly Int[], b: readonly Int[], sub: PolyProduct): Int[] {
   if (a.length === 0 || b.length === 0) return [];
-  if (a.length < b.length) return polyMulKaratsuba(b, a);
+  if (a.length < b.length) return polyMulKaratsubaWith(b, a, sub);
   if (b.length < KARATSUBA_CUTOFF) return polyMulSchoolbook(a, b);
-  if (a.length >= 2 * b.length) return polyMulUnbalanced(a, b);
+  if (a.length >= 2 * b.length) return polyMulUnbalanced(a, b, sub);
   const h = Math.ceil(a.length / 2);
   const a0 = a.slice(0, h);
   const a1 = a.slice(h);
   const b0 = b.slice(0, Math.min(h, b.length));
   const b1 = b.slice(Math.min(h, b.length));
-  const z0 = polyMulKaratsuba(a0, b0);
-  const z2 = polyMulKaratsuba(a1, b1);
-  const z1 = polyMulKaratsuba(sumHalves(a0, a1), sumHalves(b0, b1));
+  const z0 = sub(a0, b0);
+  const z2 = sub(a1, b1);
+  const z1 = sub(sumHalves(a0, a1), sumHalves(b0, b1));
   subInto(z1, z0);
   subInto(z1, z2);
   const out: Int[] = new Array<Int>(a.length + b.length - 1).fill(ZERO);
@@ -65,10 +72,10 @@ export function polyMulKaratsuba(a: readonly Int[], b: readonly Int[]): Int[] {
 }
 
 /** A long factor is cut into pieces of the short factor's length. */
-function polyMulUnbalanced(a: readonly Int[], b: readonly Int[]): Int[] {
+function polyMulUnbalanced(a: readonly Int[], b: readonly Int[], sub: PolyProduct): Int[] {
   const out: Int[] = new Array<Int>(a.length + b.length - 1).fill(ZERO);
   for (let off = 0; off < a.length; off += b.length) {
-    addInto(out, off, polyMulKaratsuba(a.slice(off, off + b.length), b));
+    addInto(out, off, sub(a.slice(off, off + b.length), b));
   }
   return out;
 }

@@ -2,13 +2,13 @@
  * Kronecker substitution: a q,ζ-series truncated to n slices is packed into one
  * polynomial in t with q^i ζ^(e/2) ↦ t^(i·W + e − lo), W wider than any product
  * slice, so the product of the packings unpacks without overlap. The packed
- * product uses Karatsuba.
+ * product goes to the polynomial dispatcher (Karatsuba or the multi-modular route).
  */
 import { JSBI, type Int, ZERO } from './integer.js';
 import { type QZSeries, makeSeries } from './qz-series.js';
 import { type Slice, dense, sliceIsZero, sliceHi, trimSlice } from './slice.js';
 import { planProduct } from './product-plan.js';
-import { polyMulKaratsuba } from './karatsuba.js';
+import { polyMultiply } from './poly-multiply.js';
 
 interface ZetaRange {
   readonly lo: number;
@@ -46,7 +46,9 @@ export function mulKronecker(x: QZSeries, y: QZSeries): QZSeries {
   if (W <= 0) {
     for (let k = 0; k < count; k++) slices.push(trimSlice(0, []));
   } else {
-    const prod = polyMulKaratsuba(pack(a, count, ra, W), pack(b, count, rb, W));
+    const pa = pack(a, count, ra, W);
+    // a square keeps one packing, so the modular route transforms it once
+    const prod = polyMultiply(pa, x === y ? pa : pack(b, count, rb, W));
     for (let k = 0; k < count; k++) {
       const row = prod.slice(k * W, (k + 1) * W);
       slices.push(trimSlice(ra.lo + rb.lo, row));

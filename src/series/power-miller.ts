@@ -10,7 +10,7 @@
  * coefficients and the division by n is exact (asserted). Otherwise the recurrence
  * runs over rationals.
  */
-import { JSBI, type Int, ONE, int, isZero } from './integer.js';
+import { JSBI, type Int, ONE, ZERO, MINUS_ONE, int, isZero } from './integer.js';
 import { type Rational, rational, radd, rmul, rdiv, rpow, rat, rIsZero } from './rational.js';
 import { type QZSeries, makeSeries, sliceCountTo, leadingExponent } from './qz-series.js';
 import {
@@ -18,6 +18,7 @@ import {
   type DenseSlice,
   EMPTY_SLICE,
   dense,
+  isSparse,
   forEachTerm,
   sliceIsZero,
   sliceWeight,
@@ -58,13 +59,64 @@ export function powerMiller(f: QZSeries, k: number): QZSeries {
   const a0 = monomialTerm(a[0]!);
   const fast = JSBI.equal(f.den, ONE) && JSBI.equal(JSBI.multiply(a0.c, a0.c), ONE);
   if (!fast && f.nvars > 1) throw new RangeError('internal: Miller recurrence over rationals needs one variable');
-  const h = fast ? millerIntegral(a, a0, k, n) : millerRational(a.map(dense), f.den, k, n);
+  const h = fast
+    ? scalarSlices(a)
+      ? millerScalar(a, a0.c, k, n)
+      : millerIntegral(a, a0, k, n)
+    : millerRational(a.map(dense), f.den, k, n);
   return shiftSeries(makeSeries(rat(0), f.qDen, h.den, h.slices, X, f.nvars), rmul(v, rat(k)));
 }
 
 interface Numerators {
   readonly den: Int;
   readonly slices: Slice[];
+}
+
+/** Whether every slice is a constant (a q-series with no ζ): the scalar fast path applies. */
+function scalarSlices(a: readonly Slice[]): boolean {
+  return a.every((s) => !isSparse(s) && (s.c.length === 0 || (s.lo === 0 && s.c.length === 1)));
+}
+
+/**
+ * The integral recurrence on a q-series: numerators only, no slice objects. With
+ * a_j = ±1 (pentagonal sums) the products are additions; the factor (k+1)j − m is
+ * applied once per term.
+ */
+function millerScalar(a: readonly Slice[], c0: Int, k: number, n: number): Numerators {
+  const coef = (j: number): Int => {
+    const s = a[j];
+    return s === undefined || sliceIsZero(s) ? ZERO : (s as DenseSlice).c[0]!;
+  };
+  const support: number[] = [];
+  const values: Int[] = [];
+  for (let j = 1; j < Math.min(n, a.length); j++) {
+    const c = coef(j);
+    if (!isZero(c)) {
+      support.push(j);
+      values.push(c);
+    }
+  }
+  const h: Int[] = new Array<Int>(n).fill(ZERO);
+  if (n === 0) return { den: ONE, slices: [] };
+  h[0] = JSBI.equal(c0, ONE) || k % 2 === 0 ? ONE : int(-1);
+  for (let m = 1; m < n; m++) {
+    let acc = ZERO;
+    for (let t = 0; t < support.length; t++) {
+      const j = support[t]!;
+      if (j > m) break;
+      const w = (k + 1) * j - m;
+      const hv = h[m - j]!;
+      if (w === 0 || isZero(hv)) continue;
+      const c = values[t]!;
+      const term = JSBI.multiply(hv, int(w));
+      acc = JSBI.equal(c, ONE) ? JSBI.add(acc, term) : JSBI.equal(c, MINUS_ONE) ? JSBI.subtract(acc, term) : JSBI.add(acc, JSBI.multiply(term, c));
+    }
+    const divisor = JSBI.multiply(int(m), c0);
+    const q = JSBI.divide(acc, divisor);
+    if (!JSBI.equal(JSBI.multiply(q, divisor), acc)) throw new RangeError('internal: inexact Miller step');
+    h[m] = q;
+  }
+  return { den: ONE, slices: h.map((v) => (isZero(v) ? EMPTY_SLICE : { lo: 0, c: [v] })) };
 }
 
 /** The integral recurrence, on slices of any number of variables. */

@@ -1,0 +1,32 @@
+/**
+ * Arithmetic modulo a prime p < 2^30 in plain JavaScript numbers. The product a·b of
+ * two residues needs 60 bits, more than a double holds, so the quotient ⌊a·b/p⌋ is
+ * estimated in floating point (off by at most one or two) and the remainder is taken
+ * exactly in 32-bit wrapping arithmetic with Math.imul: a·b − q·p is congruent to its
+ * low 32 bits and lies in (−2p, 3p) ⊂ int32, so a final correction by ±p is exact.
+ */
+export function mulmod(a: number, b: number, p: number, pinv: number): number {
+  const q = Math.floor(a * b * pinv);
+  let r = (Math.imul(a, b) - Math.imul(q, p)) | 0;
+  while (r < 0) r += p;
+  while (r >= p) r -= p;
+  return r;
+}
+
+export function powmod(base: number, e: number, p: number): number {
+  const pinv = 1 / p;
+  let r = 1;
+  let b = base % p;
+  let k = e;
+  while (k > 0) {
+    if (k & 1) r = mulmod(r, b, p, pinv);
+    b = mulmod(b, b, p, pinv);
+    k = Math.floor(k / 2);
+  }
+  return r;
+}
+
+/** The inverse of a (≠ 0 mod p) by Fermat's little theorem. */
+export function invmod(a: number, p: number): number {
+  return powmod(a, p - 2, p);
+}

@@ -1,0 +1,109 @@
+/**
+ * Exact products of integer polynomials through residues (MATH.md §8): with a proven
+ * height bound H ≥ max |c_n| of the product — here H = max|a|·max|b|·min(|a|, |b|),
+ * since each c_n is a sum of at most min(|a|, |b|) products — choose word-size primes
+ * whose product M exceeds 2H; multiply modulo each prime by NTT; recover each c_n
+ * from its residues by Garner's mixed-radix CRT (JSBI only here, at the end), taking
+ * the representative in (−M/2, M/2]. Equality of residues under M > 2H is equality
+ * over Z, so the result is exact.
+ */
+import { JSBI, type Int, ZERO, int, isZero } from '../integer.js';
+import { mulmod, invmod } from './mulmod.js';
+import { nttPrimes, NTT_MAX_LOG, type NttPrime } from './ntt-primes.js';
+import { nttMultiply } from './ntt.js';
+
+/** An upper bound of log2 |x| + 1 (the bit length), 0 for x = 0. */
+export function bitLength(x: Int): number {
+  if (isZero(x)) return 0;
+  const n = Math.abs(JSBI.toNumber(x));
+  if (Number.isFinite(n) && n < 2 ** 53) return Math.floor(Math.log2(n)) + 1;
+  return x.toString(16).replace('-', '').length * 4;
+}
+
+function maxBits(a: readonly Int[]): number {
+  let m = 0;
+  for (const x of a) if (!isZero(x)) m = Math.max(m, bitLength(x));
+  return m;
+}
+
+function residues(a: readonly Int[], prime: NttPrime): Float64Array {
+  const { p } = prime;
+  const P = int(p);
+  const out = new Float64Array(a.length);
+  for (let i = 0; i < a.length; i++) {
+    const x = a[i]!;
+    const n = JSBI.toNumber(x);
+    let r = Number.isSafeInteger(n) ? n % p : JSBI.toNumber(JSBI.remainder(x, P));
+    if (r < 0) r += p;
+    out[i] = r;
+  }
+  return out;
+}
+
+/** Bits of the height bound of a·b: log2(max|a|·max|b|·min(|a|, |b|)), rounded up. */
+export function heightBitsOf(a: readonly Int[], b: readonly Int[]): number {
+  return maxBits(a) + maxBits(b) + Math.ceil(Math.log2(Math.min(a.length, b.length) + 1));
+}
+
+/** The number of primes a height needs, or null when the table is too short. */
+export function primeCountFor(heightBits: number): number | null {
+  return primesFor(heightBits)?.length ?? null;
+}
+
+/** How many primes make M > 2H, or null when more are needed than exist. */
+export function primesFor(heightBits: number): NttPrime[] | null {
+  const all = nttPrimes();
+  const chosen: NttPrime[] = [];
+  let bits = 0;
+  // each prime exceeds 2^29, so 29 bits per prime is a safe count of log2 M
+  for (const pr of all) {
+    if (bits >= heightBits + 2) break;
+    chosen.push(pr);
+    bits += Math.floor(Math.log2(pr.p));
+  }
+  return bits >= heightBits + 2 ? chosen : null;
+}
+
+/** Garner's algorithm: the integer in (−M/2, M/2] with the given residues. */
+function garner(rs: readonly Float64Array[], primes: readonly NttPrime[], len: number): Int[] {
+  const k = primes.length;
+  const inv: number[][] = primes.map((pi, i) => primes.map((pj, j) => (j > i ? invmod(pi.p % pj.p, pj.p) : 0)));
+  let M = int(1);
+  for (const pr of primes) M = JSBI.multiply(M, int(pr.p));
+  const halfM = JSBI.divide(M, int(2));
+  const out: Int[] = new Array<Int>(len);
+  const v = new Array<number>(k);
+  for (let n = 0; n < len; n++) {
+    for (let j = 0; j < k; j++) {
+      const pj = primes[j]!.p;
+      const pinv = 1 / pj;
+      let x = rs[j]![n]!;
+      for (let i = 0; i < j; i++) {
+        x = x - v[i]!;
+        if (x < 0) x += pj;
+        x = mulmod(x, inv[i]![j]!, pj, pinv);
+      }
+      v[j] = x;
+    }
+    let acc = int(v[k - 1]!);
+    for (let j = k - 2; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, int(primes[j]!.p)), int(v[j]!));
+    out[n] = JSBI.greaterThan(acc, halfM) ? JSBI.subtract(acc, M) : acc;
+  }
+  return out;
+}
+
+/** a·b exactly, or null when the product is too long or too high for the prime table. */
+export function polyMulMultiModular(a: readonly Int[], b: readonly Int[]): Int[] | null {
+  if (a.length === 0 || b.length === 0) return [];
+  const outLen = a.length + b.length - 1;
+  if (outLen > 2 ** NTT_MAX_LOG) return null;
+  const primes = primesFor(heightBitsOf(a, b));
+  if (primes === null) return null;
+  const rs = primes.map((pr) => {
+    const ra = residues(a, pr);
+    return nttMultiply(ra, a === b ? ra : residues(b, pr), pr);
+  });
+  const out = garner(rs, primes, outLen);
+  for (let i = 0; i < outLen; i++) if (JSBI.equal(out[i]!, ZERO)) out[i] = ZERO;
+  return out;
+}

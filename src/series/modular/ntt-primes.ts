@@ -1,0 +1,54 @@
+/**
+ * Word-size primes for number-theoretic transforms: p = c·2^20 + 1 < 2^30, so every
+ * transform length up to 2^20 has a root of unity mod p. They are found once, by
+ * trial division, largest first, each with a primitive root g (g^((p−1)/f) ≠ 1 for
+ * every prime f | p − 1).
+ */
+import { powmod } from './mulmod.js';
+
+export const NTT_MAX_LOG = 20;
+
+export interface NttPrime {
+  readonly p: number;
+  /** A primitive root modulo p. */
+  readonly g: number;
+}
+
+function isPrime(n: number): boolean {
+  if (n < 2) return false;
+  for (let d = 2; d * d <= n; d++) if (n % d === 0) return false;
+  return true;
+}
+
+function primeFactors(n: number): number[] {
+  const out: number[] = [];
+  let m = n;
+  for (let d = 2; d * d <= m; d++) {
+    if (m % d === 0) {
+      out.push(d);
+      while (m % d === 0) m /= d;
+    }
+  }
+  if (m > 1) out.push(m);
+  return out;
+}
+
+function primitiveRoot(p: number): number {
+  const fs = primeFactors(p - 1);
+  for (let g = 2; ; g++) if (fs.every((f) => powmod(g, (p - 1) / f, p) !== 1)) return g;
+}
+
+let cache: NttPrime[] | null = null;
+
+/** All such primes, largest first (about a hundred). */
+export function nttPrimes(): readonly NttPrime[] {
+  if (cache !== null) return cache;
+  const out: NttPrime[] = [];
+  const step = 2 ** NTT_MAX_LOG;
+  for (let c = Math.floor((2 ** 30 - 2) / step); c >= 1; c--) {
+    const p = c * step + 1;
+    if (isPrime(p)) out.push({ p, g: primitiveRoot(p) });
+  }
+  cache = out;
+  return out;
+}

@@ -1,0 +1,89 @@
+/**
+ * The modular route against schoolbook (ARCHITECTURE.md: every multiplication algorithm
+ * is tested against the naive one on seeded random inputs), including coefficients at
+ * the height bound, negative values and the mulmod trick near 2^30.
+ */
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { JSBI, type Int, polyMulSchoolbook } from '../../src/series/index.js';
+import { polyMulMultiModular, primesFor, bitLength } from '../../src/series/modular/multi-modular-product.js';
+import { mulmod } from '../../src/series/modular/mulmod.js';
+import { nttPrimes } from '../../src/series/modular/ntt-primes.js';
+
+const SEED = 61;
+
+describe('word-size modular arithmetic', () => {
+  it('mulmod agrees with exact products for residues near 2^30', () => {
+    const primes = nttPrimes();
+    expect(primes.length).toBeGreaterThan(40);
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: primes.length - 1 }), fc.nat(), fc.nat(), (i, x, y) => {
+        const p = primes[i]!.p;
+        const a = x % p;
+        const b = y % p;
+        const exact = Number((BigIntOf(a) * BigIntOf(b)) % BigIntOf(p));
+        expect(mulmod(a, b, p, 1 / p)).toBe(exact);
+        expect(mulmod(p - 1, p - 1, p, 1 / p)).toBe(1);
+      }),
+      { seed: SEED, numRuns: 2000 },
+    );
+  });
+});
+
+/** Test-only conversion: the test oracle may use the language's integers. */
+function BigIntOf(n: number): bigint {
+  return BigInt(n);
+}
+
+describe('multi-modular products are exact', () => {
+  const poly = (len: number, bits: number): fc.Arbitrary<Int[]> =>
+    fc
+      .array(fc.bigInt({ min: -(1n << BigInt(bits)), max: 1n << BigInt(bits) }), { minLength: len, maxLength: len })
+      .map((xs) => xs.map((x) => JSBI.BigInt(x.toString())));
+  it.each([
+    [1, 5, 10],
+    [40, 60, 20],
+    [200, 300, 90],
+    [700, 500, 300],
+  ])('lengths %i × %i with %i-bit coefficients', (n, m, bits) => {
+    fc.assert(
+      fc.property(poly(n, bits), poly(m, bits), (a, b) => {
+        const mod = polyMulMultiModular(a, b);
+        expect(mod).not.toBeNull();
+        expect(mod!.map(String)).toEqual(polyMulSchoolbook(a, b).map(String));
+      }),
+      { seed: SEED, numRuns: n > 100 ? 3 : 20 },
+    );
+  });
+  it('coefficients at the height bound: all-maximal inputs give the extreme product', () => {
+    const top = JSBI.subtract(JSBI.exponentiate(JSBI.BigInt(2), JSBI.BigInt(200)), JSBI.BigInt(1));
+    const a = new Array<Int>(300).fill(top);
+    const b = new Array<Int>(300).fill(JSBI.unaryMinus(top));
+    expect(polyMulMultiModular(a, b)!.map(String)).toEqual(polyMulSchoolbook(a, b).map(String));
+  });
+  it('chooses enough primes: their product exceeds twice the height bound', () => {
+    for (const bits of [1, 30, 61, 500, 2000]) {
+      const primes = primesFor(bits)!;
+      const logM = primes.reduce((s, p) => s + Math.log2(p.p), 0);
+      expect(logM).toBeGreaterThan(bits + 1);
+    }
+    expect(bitLength(JSBI.BigInt(255))).toBe(8);
+  });
+});
+
+describe('the dispatcher sends long products to the modular route, exactly', () => {
+  it('long q-series products through Kronecker substitution agree with schoolbook', async () => {
+    const { choosePolyAlgorithm } = await import('../../src/series/index.js');
+    const { seriesArbitrary, seriesKey } = await import('../helpers/random-series.js');
+    const { mulKronecker, mulSchoolbook } = await import('../../src/series/index.js');
+    const long = seriesArbitrary({ slices: 400, width: 1, density: 0.9, bits: 50 });
+    fc.assert(
+      fc.property(long, long, (a, b) => {
+        expect(seriesKey(mulKronecker(a, b))).toBe(seriesKey(mulSchoolbook(a, b)));
+      }),
+      { seed: SEED, numRuns: 3 },
+    );
+    const big = new Array<Int>(400).fill(JSBI.BigInt('123456789012345'));
+    expect(choosePolyAlgorithm(big, big)).toBe('modular');
+  });
+});
