@@ -60,7 +60,7 @@ export function powMod(base, n) {
  * non-zero slice (−1 for the zero series). Throws if den ≠ 1 or a non-zero slice
  * lies off the integer-step grid of the leading power.
  */
-export function seriesChecksum(series) {
+export function seriesChecksum(series, originIndex = null) {
   if (!JSBI.equal(series.den, ONE)) {
     throw new Error(`checksum needs integer coefficients, got denominator ${series.den.toString()}`);
   }
@@ -80,9 +80,12 @@ export function seriesChecksum(series) {
   };
   let pow3 = ONE; // 3^k for the current k
   let k = 0;
-  for (let i = leadIndex; i < slices.length; i++) {
+  // k counts integer q-steps from the leading power, or from `originIndex` when given
+  // (W4: from q^0, so that c_0 = 0 enters the weighted sum as the issue defines it).
+  const origin = originIndex ?? leadIndex;
+  for (let i = origin; i < slices.length; i++) {
     const s = slices[i];
-    const offset = i - leadIndex;
+    const offset = i - origin;
     if (offset % series.qDen !== 0) {
       if (!sliceIsZero(s)) throw new Error(`non-zero slice ${i} is not an integer number of q-steps past the lead`);
       continue;

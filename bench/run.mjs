@@ -40,12 +40,20 @@ function parseArgs(argv) {
   return opts;
 }
 
+/** The slice index of q^x in a series (x on its grid). */
+function sliceIndexOf(series, x) {
+  for (let i = 0; i < series.slices.length; i++) if (rcmp(sliceExponent(series, i), x) === 0) return i;
+  throw new Error('k origin is not on the series grid');
+}
+
 /** Times one fresh expansion and checks it is the series asked for. */
 function runOnce(w) {
   const t0 = performance.now();
   const series = w.build();
   const ms = performance.now() - t0;
-  const { sum, wsum, leadIndex } = seriesChecksum(series);
+  w.verify?.(series);
+  const origin = w.kOrigin === undefined ? null : sliceIndexOf(series, w.kOrigin);
+  const { sum, wsum, leadIndex } = seriesChecksum(series, origin);
   const want = radd(w.lead, rat(w.steps));
   if (!req(series.exactTo, want)) throw new Error(`${w.name}: expanded to the wrong q-order`);
   if (leadIndex < 0 || rcmp(sliceExponent(series, leadIndex), w.lead) !== 0) {

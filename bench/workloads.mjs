@@ -4,8 +4,8 @@
  * q-power and `steps` the number of integer q-steps past it, so the series is asked
  * for to q-order lead + steps.
  */
-import { rat, radd, powerSource, productSource, mapSource, substituteLinear } from '../dist/series/index.js';
-import { thetaSource, etaPowerSource } from '../dist/forms/leaves.js';
+import { rat, radd, powerSource, productSource, mapSource, substituteLinear, sumSource, scaleSeries, subtractSeries, isZeroSeries } from '../dist/series/index.js';
+import { thetaSource, etaPowerSource, eisensteinSource } from '../dist/forms/leaves.js';
 import { phiMinus2Source } from '../dist/forms/phi-m2-1.js';
 import { phi0Source } from '../dist/forms/phi-0-1.js';
 
@@ -48,6 +48,25 @@ export const WORKLOADS = [
     build() {
       const src = powerSource(productSource([phiMinus2Source(), phi0Source()]), 6);
       return expandSteps(src, this.lead, this.steps);
+    },
+  },
+  {
+    name: 'W4',
+    title: 'E_4³ − E_6² to q^20000 (checked equal to 1728·Δ; k counted from q^0)',
+    lead: rat(1),
+    steps: 19999,
+    kOrigin: rat(0),
+    build() {
+      const src = sumSource([
+        { source: powerSource(eisensteinSource(4), 3), coefficient: rat(1) },
+        { source: powerSource(eisensteinSource(6), 2), coefficient: rat(-1) },
+      ]);
+      return expandSteps(src, this.lead, this.steps);
+    },
+    /** Not timed: the result must be 1728·Δ (Δ = η^24 by its own route). */
+    verify(s) {
+      const delta = scaleSeries(etaPowerSource(24).expand(rat(20000)), rat(1728));
+      if (!isZeroSeries(subtractSeries(s, delta))) throw new Error('W4: E_4^3 - E_6^2 differs from 1728 Delta');
     },
   },
   {
