@@ -2,7 +2,9 @@
  * η-powers against OEIS: Π(1−qⁿ)^e for e = 1…12, 24, and 1/η, 1/Δ.
  */
 import { describe, expect, it } from 'vitest';
-import { etaPowerSeries, eulerProductSeries } from '../../src/forms/eta.js';
+import { etaPowerSeries, eulerProductSeries, eulerCubeSeries } from '../../src/forms/eta.js';
+import { powerMiller, radd, shiftSeries } from '../../src/series/index.js';
+import { seriesKey } from '../helpers/random-series.js';
 import { rat } from '../../src/series/index.js';
 import { readOeis } from '../helpers/oeis.js';
 import { qCoefficients } from '../helpers/series.js';
@@ -45,5 +47,20 @@ describe('eta powers', () => {
     const seq = readOeis('A006922'); // OEIS A006922, offset −1
     const s = etaPowerSeries(-24, rat(seq.terms.length - 2));
     expect(qCoefficients(s, seq.terms.length, rat(-1))).toEqual(seq.terms);
+  });
+
+  it("Π(1−qⁿ)³ from Jacobi's identity is OEIS A010816", () => {
+    const seq = readOeis('A010816'); // OEIS A010816: Σ (−1)ⁿ(2n+1) q^{n(n+1)/2}
+    expect(qCoefficients(eulerCubeSeries(rat(seq.terms.length - 1)), seq.terms.length)).toEqual(seq.terms);
+  });
+
+  it('long η-powers (cubes squared through the modular route) agree with Miller\'s recurrence', () => {
+    // 3000 slices take the cube-and-square route; the recurrence on the pentagonal sum is independent of it
+    const X = rat(3000);
+    for (const e of [4, 24]) {
+      const viaCubes = etaPowerSeries(e, radd(X, rat(e, 24)));
+      const viaMiller = shiftSeries(powerMiller(eulerProductSeries(X), e), rat(e, 24));
+      expect(seriesKey(viaCubes)).toBe(seriesKey(viaMiller));
+    }
   });
 });
