@@ -26,10 +26,10 @@ function maxBits(a: readonly Int[]): number {
   return m;
 }
 
-function residues(a: readonly Int[], prime: NttPrime): Float64Array {
+function residues(a: readonly Int[], prime: NttPrime): Int32Array {
   const { p } = prime;
   const P = int(p);
-  const out = new Float64Array(a.length);
+  const out = new Int32Array(a.length);
   for (let i = 0; i < a.length; i++) {
     const x = a[i]!;
     const n = JSBI.toNumber(x);
@@ -65,7 +65,7 @@ export function primesFor(heightBits: number): NttPrime[] | null {
 }
 
 /** Garner's algorithm: the integer in (−M/2, M/2] with the given residues. */
-function garner(rs: readonly Float64Array[], primes: readonly NttPrime[], len: number): Int[] {
+function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], len: number): Int[] {
   const k = primes.length;
   const inv: number[][] = primes.map((pi, i) => primes.map((pj, j) => (j > i ? invmod(pi.p % pj.p, pj.p) : 0)));
   let M = int(1);

@@ -1,13 +1,15 @@
 /**
  * The number-theoretic transform modulo a word-size prime (iterative radix-2
- * Cooley–Tukey, in place, on Float64Array residues) and the cyclic product it gives:
+ * Cooley–Tukey, in place, on Int32Array residues) and the cyclic product it gives:
  * a·b mod (p, x^n − 1) with n a power of two at least |a| + |b| − 1 is the full
- * product. Hot loops use only numbers and typed arrays (ARCHITECTURE.md).
+ * product. Hot loops use only numbers and typed arrays (ARCHITECTURE.md); the modular
+ * product in the butterfly is mulmod.ts's, inlined, with branch-free corrections
+ * (`(v >> 31) & p` adds p exactly when v is negative).
  */
 import { mulmod, powmod, invmod } from './mulmod.js';
 import type { NttPrime } from './ntt-primes.js';
 
-function bitReverse(a: Float64Array): void {
+function bitReverse(a: Int32Array): void {
   const n = a.length;
   for (let i = 1, j = 0; i < n; i++) {
     let bit = n >> 1;
@@ -22,16 +24,16 @@ function bitReverse(a: Float64Array): void {
 }
 
 /** Powers of a primitive n-th root of unity (or its inverse), cached per prime and size. */
-const twiddleCache = new Map<string, Float64Array>();
+const twiddleCache = new Map<string, Int32Array>();
 
-function twiddles(prime: NttPrime, n: number, inverse: boolean): Float64Array {
+function twiddles(prime: NttPrime, n: number, inverse: boolean): Int32Array {
   const key = `${prime.p}:${n}:${inverse ? 1 : 0}`;
   let t = twiddleCache.get(key);
   if (t === undefined) {
     const { p } = prime;
     let w = powmod(prime.g, (p - 1) / n, p);
     if (inverse) w = invmod(w, p);
-    t = new Float64Array(Math.max(1, n >> 1));
+    t = new Int32Array(Math.max(1, n >> 1));
     t[0] = 1;
     for (let k = 1; k < t.length; k++) t[k] = mulmod(t[k - 1]!, w, p, 1 / p);
     twiddleCache.set(key, t);
@@ -39,7 +41,7 @@ function twiddles(prime: NttPrime, n: number, inverse: boolean): Float64Array {
   return t;
 }
 
-export function ntt(a: Float64Array, prime: NttPrime, inverse: boolean): void {
+export function ntt(a: Int32Array, prime: NttPrime, inverse: boolean): void {
   const { p } = prime;
   const pinv = 1 / p;
   const n = a.length;
@@ -49,16 +51,22 @@ export function ntt(a: Float64Array, prime: NttPrime, inverse: boolean): void {
     const half = len >> 1;
     // the len-th roots are every (n/len)-th entry of the n-th roots
     const stride = n / len;
-    const ws = new Float64Array(half);
-    for (let k = 0; k < half; k++) ws[k] = table[k * stride]!;
     for (let i = 0; i < n; i += len) {
       for (let k = 0; k < half; k++) {
+        const w = table[k * stride]!;
+        const x = a[i + k + half]!;
+        const q = (x * w * pinv) | 0;
+        let v = (Math.imul(x, w) - Math.imul(q, p)) | 0;
+        v += (v >> 31) & p;
+        v -= p;
+        v += (v >> 31) & p;
         const u = a[i + k]!;
-        const v = mulmod(a[i + k + half]!, ws[k]!, p, pinv);
-        const s = u + v;
-        a[i + k] = s >= p ? s - p : s;
-        const d = u - v;
-        a[i + k + half] = d < 0 ? d + p : d;
+        let s = u + v - p;
+        s += (s >> 31) & p;
+        let d = u - v;
+        d += (d >> 31) & p;
+        a[i + k] = s;
+        a[i + k + half] = d;
       }
     }
   }
@@ -69,17 +77,17 @@ export function ntt(a: Float64Array, prime: NttPrime, inverse: boolean): void {
 }
 
 /** The product of two residue vectors modulo p, of length |a| + |b| − 1. */
-export function nttMultiply(a: Float64Array, b: Float64Array, prime: NttPrime): Float64Array {
+export function nttMultiply(a: Int32Array, b: Int32Array, prime: NttPrime): Int32Array {
   const outLen = a.length + b.length - 1;
   let n = 1;
   while (n < outLen) n <<= 1;
-  const fa = new Float64Array(n);
+  const fa = new Int32Array(n);
   fa.set(a);
   ntt(fa, prime, false);
   // a square needs one forward transform, not two
   let fb = fa;
   if (b !== a) {
-    fb = new Float64Array(n);
+    fb = new Int32Array(n);
     fb.set(b);
     ntt(fb, prime, false);
   }
