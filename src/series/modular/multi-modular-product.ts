@@ -12,18 +12,27 @@ import { mulmod, invmod } from './mulmod.js';
 import { nttPrimes, NTT_MAX_LOG, type NttPrime } from './ntt-primes.js';
 import { nttMultiply } from './ntt.js';
 
-/** An upper bound of log2 |x| + 1 (the bit length), 0 for x = 0. */
+/**
+ * An upper bound of the bit length of x, 0 for x = 0. Below 2^1024 the nearest double
+ * has the same binary exponent or the next one up, so ⌊log2⌋ + 2 never falls short;
+ * above, the hexadecimal digits are counted.
+ */
 export function bitLength(x: Int): number {
   if (isZero(x)) return 0;
   const n = Math.abs(JSBI.toNumber(x));
-  if (Number.isFinite(n) && n < 2 ** 53) return Math.floor(Math.log2(n)) + 1;
+  if (Number.isFinite(n)) return Math.floor(Math.log2(n)) + 2;
   return x.toString(16).replace('-', '').length * 4;
 }
 
 function maxBits(a: readonly Int[]): number {
-  let m = 0;
-  for (const x of a) if (!isZero(x)) m = Math.max(m, bitLength(x));
-  return m;
+  let largest = 0;
+  let huge = 0;
+  for (const x of a) {
+    const n = Math.abs(JSBI.toNumber(x));
+    if (Number.isFinite(n)) largest = Math.max(largest, n);
+    else huge = Math.max(huge, bitLength(x));
+  }
+  return Math.max(huge, largest === 0 ? 0 : Math.floor(Math.log2(largest)) + 2);
 }
 
 function residues(a: readonly Int[], prime: NttPrime): Int32Array {

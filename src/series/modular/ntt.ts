@@ -93,7 +93,16 @@ export function nttMultiply(a: Int32Array, b: Int32Array, prime: NttPrime): Int3
   }
   const { p } = prime;
   const pinv = 1 / p;
-  for (let i = 0; i < n; i++) fa[i] = mulmod(fa[i]!, fb[i]!, p, pinv);
+  for (let i = 0; i < n; i++) {
+    const x = fa[i]!;
+    const y = fb[i]!;
+    const q = (x * y * pinv) | 0;
+    let v = (Math.imul(x, y) - Math.imul(q, p)) | 0;
+    v += (v >> 31) & p;
+    v -= p;
+    v += (v >> 31) & p;
+    fa[i] = v;
+  }
   ntt(fa, prime, true);
   return fa.subarray(0, outLen);
 }
