@@ -172,6 +172,13 @@ describe('V_l and T_p: preconditions and starts (MATH.md §7)', () => {
     expect(v.verdict).toBe('refuted');
     expect(v.mismatch).toEqual({ q: '1', zeta: ['0'], left: '1', right: '0' });
   });
+  it('T_p can start below its input when N_min > 0 (correction to MATH.md §7)', () => {
+    // Δ·φ_{10,1} starts at q² (N_min = 4·2 − 1 = 7); c′(3) = c(12) + … reads the input at q³,
+    // so T_2 of it has a q¹ term, below the (p²N_min + r²)/4 ≥ 7 that §7's formula gives.
+    const s = expand('T_2(Delta*phi_{10,1})', 1);
+    expect(rationalToString(coefficientAt(s, rat(1), 0))).not.toBe('0');
+    expect(rationalToString(coefficientAt(expand('Delta*phi_{10,1}', 1), rat(1), 0))).toBe('0');
+  });
   it('operators compose and need their inputs to a higher q-order', () => {
     expect(checkOne('V_2(U_3(phi_{0,1})) is jacobi(weight 0, index 18) weak').verdict).toBe('proved');
     expect(checkOne('taylor(heat(phi_{-2,1}), 0) == -1/2').verdict).toBe('proved');
