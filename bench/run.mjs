@@ -20,6 +20,7 @@ import { fileURLToPath } from 'node:url';
 import { rat, radd, rcmp, req, sliceExponent } from '../dist/series/index.js';
 import { WORKLOADS, workloadByName } from './workloads.mjs';
 import { seriesChecksum } from './checksum.mjs';
+import { COLLECTIONS, runCollectionOnce } from './collection.mjs';
 
 const RUNS = 5;
 const SELF = fileURLToPath(import.meta.url);
@@ -117,8 +118,8 @@ function markdown(results, totalMs) {
     '|---|---|---:|---:|---:|---:|',
   ];
   for (const r of results) {
-    const w = workloadByName(r.workload);
-    lines.push(`| ${r.workload} | ${w.title} | ${r.bestMs.toFixed(1)} | ${r.medianMs === null ? '—' : r.medianMs.toFixed(1)} | ${r.sum} | ${r.wsum} |`);
+    const title = (WORKLOADS.find((x) => x.name === r.workload) ?? COLLECTIONS.find((x) => x.name === r.workload)).title;
+    lines.push(`| ${r.workload} | ${title} | ${r.bestMs.toFixed(1)} | ${r.medianMs === null ? '—' : r.medianMs.toFixed(1)} | ${r.sum ?? '—'} | ${r.wsum ?? '—'} |`);
   }
   return lines.join('\n') + '\n';
 }
@@ -138,13 +139,21 @@ function main() {
     process.stdout.write(JSON.stringify({ workload: w.name, ms: r.ms, sum: r.sum, wsum: r.wsum }) + '\n');
     return;
   }
-  const selected = opts.names.length === 0 ? WORKLOADS : opts.names.map(workloadByName);
+  const selected = opts.names.length === 0 ? WORKLOADS : opts.names.filter((n) => !COLLECTIONS.some((c) => c.name === n)).map(workloadByName);
   const t0 = performance.now();
   const results = [];
   for (const w of selected) {
     const r = benchWorkload(w, opts.quick);
     results.push(r);
     console.log(`${r.workload}: best ${r.bestMs} ms, median (child) ${r.medianMs ?? '—'} ms, sum ${r.sum}, wsum ${r.wsum}`);
+  }
+  const collections = opts.names.length === 0 ? COLLECTIONS : COLLECTIONS.filter((c) => opts.names.includes(c.name));
+  for (const c of collections) {
+    const times = [];
+    for (let i = 0; i < (opts.quick ? 1 : RUNS); i++) times.push(runCollectionOnce(c));
+    const r = { workload: c.name, bestMs: round(Math.min(...times)), medianMs: round(median(times)), sum: null, wsum: null };
+    results.push(r);
+    console.log(`${r.workload}: best ${r.bestMs} ms, median ${r.medianMs} ms`);
   }
   const totalMs = performance.now() - t0;
   const md = markdown(results, totalMs);
