@@ -18,6 +18,7 @@ import type { CheckOptions } from './check-options.js';
 import type { Outcome } from './outcome.js';
 import { evalCodes } from './diagnostic-codes.js';
 import { latticeProblem } from './lattice-check.js';
+import { dependencyClosure } from './dependency-closure.js';
 
 type ClaimStatement = Extract<Statement, { kind: 'claim' }>;
 type LetStatement = Extract<Statement, { kind: 'let' }>;
@@ -122,7 +123,15 @@ function checkClaim(
   const line = s.span.startLine;
   const name = s.name ?? `${ast.file}:${line}`;
   const expected: Expectation = s.expect ?? 'proved';
-  const base = { file: ast.file, line, name, expected, claimText: sourceText(ast.text, s.span) };
+  const base = {
+    file: ast.file,
+    line,
+    name,
+    expected,
+    claimText: sourceText(ast.text, s.span),
+    relation: s.relation.kind === 'identity' ? ('identity' as const) : ('type' as const),
+    ...(opts.evidence === true ? { closure: dependencyClosure(ast, s) } : {}),
+  };
   const earlier = names.get(name);
   if (earlier !== undefined) {
     const d = diagnostic(evalCodes.duplicateClaim, { name, line: earlier }, s.span);

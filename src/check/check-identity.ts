@@ -8,10 +8,10 @@
 import { type Rational, rat, radd, rmin, rationalToString, type QZSeries, powerText } from '../series/index.js';
 import type { Expr } from '../lang/ast.js';
 import { type ModularType, typesEqual, typeDifferences, type FormClass } from '../types/index.js';
-import type { MismatchRecord, TypeRecord } from '../verdict/index.js';
+import type { ComparisonEvidence, FactorRecord, MismatchRecord, TypeRecord } from '../verdict/index.js';
 import type { Monomial, AtomPower } from './atom.js';
 import { evaluate, type EvalContext } from './evaluate.js';
-import { atomMonomial, monomialText, multiplyMonomials, powerMonomial, ONE_MONOMIAL, isZeroMonomial } from './monomial.js';
+import { atomMonomial, monomialText, sortedFactors, multiplyMonomials, powerMonomial, ONE_MONOMIAL, isZeroMonomial } from './monomial.js';
 import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
 import { numeratorSource } from './monomial-source.js';
 import { compareTo, type Mismatch } from './compare-series.js';
@@ -24,6 +24,8 @@ import type { Outcome } from './outcome.js';
 import { evalCodes } from './diagnostic-codes.js';
 import { evalError } from './eval-error.js';
 import { typeRecord } from './type-record.js';
+import { comparisonEvidence } from './comparison-evidence.js';
+import { boundParameters } from './bound-parameters.js';
 
 interface NormalForm {
   readonly left: Monomial;
@@ -75,6 +77,11 @@ function mismatchRecord(m: Mismatch): MismatchRecord {
   };
 }
 
+/** Each factor of a side of F with the type the rules give it (certificates list them). */
+function factorRecords(m: Monomial): FactorRecord[] {
+  return sortedFactors(m).map((p) => ({ atom: p.atom.key, exponent: p.exponent, type: typeRecord(p.atom.type, p.atom.cls) }));
+}
+
 function worstClass(a: FormClass, b: FormClass): FormClass {
   if (a === 'quasi' || b === 'quasi') return 'quasi';
   return a === 'meromorphic' || b === 'meromorphic' ? 'meromorphic' : 'modular';
@@ -114,6 +121,10 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
     right: monomialText(nf.right),
     ...(nf.crossMultiplied ? { leftMultipliedBy: monomialText(nf.leftBy), rightMultipliedBy: monomialText(nf.rightBy) } : {}),
     type: typeRecord(tF, quasi ? 'quasi' : 'modular'),
+    leftCoefficient: rationalToString(nf.left.coefficient),
+    leftFactors: factorRecords(nf.left),
+    rightCoefficient: rationalToString(nf.right.coefficient),
+    rightFactors: factorRecords(nf.right),
   } as const;
   if (tF === null || (isZeroMonomial(nf.left) && isZeroMonomial(nf.right))) {
     return { verdict: 'proved', type: claimType, compared, normalForm: normal, reason: 'both sides are the literal 0' };
@@ -124,15 +135,17 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
     const to = radd(X, rat(opts.depth));
     const [a, b] = expandBoth(nf, tF, to, opts);
     const c = compareTo(a, b, to, zetaNormFor(tF));
+    const evidence = withEvidence(opts, () => comparisonEvidence(a, b, to, zetaNormFor(tF), c.mismatch));
     const reasons = [...new Set([...quasiReasons(l), ...quasiReasons(r)])].join('; ');
     if (c.mismatch !== null) {
-      return { verdict: 'refuted', type: claimType, compared, normalForm: normal, mismatch: mismatchRecord(c.mismatch), reason: `the expansions differ (${reasons}; compared to the nominal bound plus ${opts.depth} q-steps)` };
+      return { verdict: 'refuted', type: claimType, compared, normalForm: normal, ...evidence, mismatch: mismatchRecord(c.mismatch), reason: `the expansions differ (${reasons}; compared to the nominal bound plus ${opts.depth} q-steps)` };
     }
     return {
       verdict: 'unproved',
       type: claimType,
       compared,
       normalForm: normal,
+      ...evidence,
       reason: `no proven type: ${reasons}; the coefficients agree up to ${powerText('q', to, false)} (${c.compared} non-zero coefficients compared; nominal bound ${powerText('q', X, false)} plus ${opts.depth} q-steps)`,
     };
   }
@@ -140,8 +153,9 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
   const [a, b] = expandBoth(nf, tF, marginTo, opts);
   const norm = zetaNormFor(tF);
   const c = compareTo(a, b, X, norm);
+  const evidence = withEvidence(opts, () => comparisonEvidence(a, b, X, norm, c.mismatch));
   if (c.mismatch !== null) {
-    return { verdict: 'refuted', type: claimType, compared, normalForm: normal, mismatch: mismatchRecord(c.mismatch), reason: 'a coefficient inside the bound differs' };
+    return { verdict: 'refuted', type: claimType, compared, normalForm: normal, ...evidence, mismatch: mismatchRecord(c.mismatch), reason: 'a coefficient inside the bound differs' };
   }
   const margin = compareTo(a, b, marginTo, norm);
   if (margin.mismatch !== null) return marginFailure(ctx, margin.mismatch, marginTo);
@@ -150,8 +164,21 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
     type: claimType,
     compared,
     normalForm: normal,
-    bound: { theorem, qOrder: rationalToString(X), coefficientsChecked: c.compared, derivation, marginTo: rationalToString(marginTo) },
+    ...evidence,
+    bound: {
+      theorem,
+      qOrder: rationalToString(X),
+      coefficientsChecked: c.compared,
+      derivation,
+      marginTo: rationalToString(marginTo),
+      ...(opts.evidence === true ? { parameters: boundParameters(tF) } : {}),
+    },
   };
+}
+
+/** `{ evidence }` when the run records evidence, `{}` otherwise (the work is skipped). */
+function withEvidence(opts: CheckOptions, make: () => ComparisonEvidence): { evidence?: ComparisonEvidence } {
+  return opts.evidence === true ? { evidence: make() } : {};
 }
 
 function marginFailure(ctx: EvalContext, m: Mismatch, marginTo: Rational): Outcome {

@@ -9,6 +9,12 @@ export interface CheckOptions {
   /** q-steps past the bound compared after a proof (MATH.md §6: at least two). */
   readonly margin: number;
   /**
+   * Record what certificates and the HTML report need: the digest and a grid of the
+   * compared coefficients, the bound's parameters, the claim's dependency closure.
+   * Off by default, since hashing every coefficient costs time a plain check skips.
+   */
+  readonly evidence?: boolean;
+  /**
    * Test-only: replaces the inferred type of F before the bound is taken, to show
    * that a wrong type rule is caught by the margin check. Never set by the CLI.
    */

@@ -22,12 +22,12 @@ const ALL: readonly CommandName[] = ['check', 'expand', 'type', 'recheck'];
 
 export const OPTIONS: readonly OptionSpec[] = [
   { name: 'to', kind: 'rational', commands: ['expand'], value: 'X', help: 'expand up to q^X inclusive (a rational, e.g. 25/8)', defaultText: 'leading exponent + 5' },
-  { name: 'format', kind: 'choice', commands: ['check', 'expand'], value: 'FMT', choices: ['text', 'json', 'junit'], help: 'output format: text or json (expand); text, json or junit (check; junit not available yet)', defaultText: 'text' },
+  { name: 'format', kind: 'choice', commands: ['check', 'expand'], value: 'FMT', choices: ['text', 'json', 'junit'], help: 'output format: text or json (expand); text, json or junit (check; junit is JUnit XML)', defaultText: 'text' },
   { name: 'variables', kind: 'string', commands: ['expand', 'type'], value: 'z1,z2', help: 'the abelian variables of the expression', defaultText: 'z' },
   { name: 'max-terms', kind: 'integer', commands: ALL, value: 'N', min: 1, help: 'refuse any expansion needing more than N coefficients', defaultText: '10000000' },
   { name: 'output', kind: 'string', commands: ['check'], value: 'FILE', help: 'write the report to FILE instead of standard output' },
-  { name: 'report', kind: 'string', commands: ['check'], value: 'FILE.html', help: 'also write an HTML report (not available yet)' },
-  { name: 'certificates', kind: 'string', commands: ['check'], value: 'DIR', help: 'write one JSON certificate per proved claim into DIR (not available yet)' },
+  { name: 'report', kind: 'string', commands: ['check'], value: 'FILE.html', help: 'also write a self-contained HTML report with coefficient grids' },
+  { name: 'certificates', kind: 'string', commands: ['check'], value: 'DIR', help: 'write one JSON certificate per proved claim into DIR (created if missing; see sturmcheck recheck)' },
   { name: 'jobs', kind: 'integer', commands: ['check'], value: 'N', min: 1, help: 'worker threads; accepted, but for now claims are checked in-process, one after another, in file order', defaultText: '1' },
   { name: 'depth', kind: 'integer', commands: ['check'], value: 'N', min: 0, help: 'q-steps past the nominal bound compared for unproved claims', defaultText: '10' },
   { name: 'verbose', kind: 'flag', commands: ['check', 'type'], help: 'show types and the derivation of each bound' },

@@ -9,6 +9,7 @@ import { type CliIo, EXIT_FAILED, EXIT_USAGE } from './io.js';
 import { runExpand } from './commands/expand.js';
 import { runCheck } from './commands/check.js';
 import { runType } from './commands/type.js';
+import { runRecheck } from './commands/recheck.js';
 
 export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
   const parsed = parseArgs(argv);
@@ -33,6 +34,8 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
         return runCheck(args, io);
       case 'type':
         return runType(args, io);
+      case 'recheck':
+        return runRecheck(args, io);
       default:
         io.stderr(`sturmcheck: '${args.command}' is not available in this version yet\n`);
         return EXIT_USAGE;

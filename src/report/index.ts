@@ -1,4 +1,4 @@
-/** Renderers: expansions (text, JSON) and the reports of `check` (text, JSON; later JUnit XML and HTML). */
+/** Renderers: expansions (text, JSON) and the reports of `check` (text, JSON, JUnit XML, HTML). */
 export { expansionText, expansionHeader, sliceText } from './expansion-text.js';
 export { expansionJson, type ExpansionJson } from './expansion-json.js';
 export { typeJson, type TypeJson } from './type-json.js';
@@ -9,3 +9,6 @@ export { REPORTERS } from './reporters.js';
 export { checkJson, claimJson, type CheckJson, type ClaimJson } from './json-report.js';
 export { mismatchText } from './mismatch-text.js';
 export { typeDescriptionText } from './type-description-text.js';
+export { junitXml, junitReporter } from './junit-report.js';
+export { htmlReport, htmlReporter } from './html-report.js';
+export { xmlText } from './xml-text.js';

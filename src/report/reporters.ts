@@ -6,9 +6,10 @@
 import type { Reporter } from './reporter.js';
 import { terminalReporter } from './terminal-report.js';
 import { jsonReporter } from './json-report.js';
+import { junitReporter } from './junit-report.js';
 
 export const REPORTERS: ReadonlyMap<string, Reporter> = new Map<string, Reporter>([
   ['text', terminalReporter],
   ['json', jsonReporter],
-  // 'junit' (JUnit XML) belongs here once report/junit-report.ts exists.
+  ['junit', junitReporter],
 ]);

@@ -1,2 +1,4 @@
 /** Verdict and certificate data types. */
 export * from './verdict.js';
+export * from './coefficient-grid.js';
+export * from './certificate.js';

@@ -1,9 +1,11 @@
 /**
  * The verdict record of one claim (CLAIMS.md, verdicts and `--format json`). Data
- * only: the checker fills it, reporters render it, certificates (a later issue)
- * extend it with the digest of the compared coefficients.
+ * only: the checker fills it, reporters render it, and certificates are built from it
+ * (the digest of the compared coefficients and the claim's closure travel in
+ * `evidence` and `closure`, filled only when a run asks for them).
  */
 import type { Diagnostic } from '../lang/diagnostic.js';
+import type { CoefficientGrid } from './coefficient-grid.js';
 
 export type VerdictKind = 'proved' | 'refuted' | 'unproved' | 'error';
 export type Expectation = 'proved' | 'refuted' | 'unproved';
@@ -26,6 +28,20 @@ export interface BoundRecord {
   readonly derivation: string;
   /** The q-order the margin check reached (MATH.md §6). */
   readonly marginTo?: string;
+  /** The numbers the theorem was applied to; filled when evidence is recorded. */
+  readonly parameters?: BoundParameters;
+}
+
+/** K, m (or M), and for Theorem B the rank of M and ρ (MATH.md §6). */
+export interface BoundParameters {
+  /** K: the weight of F. */
+  readonly weight: string;
+  /** m for one variable (as used: max(m, 0)), the matrix M for several. */
+  readonly index: string | string[][];
+  /** rank M after splitting off its kernel (several variables only). */
+  readonly rank?: number;
+  /** ρ of the reduced index (several variables only; an upper bound is sound). */
+  readonly rho?: string;
 }
 
 export interface MismatchRecord {
@@ -34,6 +50,13 @@ export interface MismatchRecord {
   readonly zeta: readonly string[];
   readonly left: string;
   readonly right: string;
+}
+
+/** One factor `atom^exponent` of a side of F, with the type the rules give the atom. */
+export interface FactorRecord {
+  readonly atom: string;
+  readonly exponent: number;
+  readonly type: TypeRecord;
 }
 
 /** The normalised function F = 0 that was checked (MATH.md §4), for reports and certificates. */
@@ -46,6 +69,26 @@ export interface NormalFormRecord {
   readonly left: string;
   readonly right: string;
   readonly type: TypeRecord;
+  /** The rational coefficient and the factors of each side of F (certificates). */
+  readonly leftCoefficient?: string;
+  readonly leftFactors?: readonly FactorRecord[];
+  readonly rightCoefficient?: string;
+  readonly rightFactors?: readonly FactorRecord[];
+}
+
+/**
+ * What the comparison of the two sides of F saw, recorded when a run asks for it
+ * (certificates, the HTML report): the canonical digest of every compared coefficient
+ * (grammar/certificate.schema.json defines the list) and a small grid to show.
+ */
+export interface ComparisonEvidence {
+  /** The q-order compared to (inclusive): the bound, or the nominal bound plus depth. */
+  readonly upTo: string;
+  /** Positions where either side is non-zero, q-exponent ≤ upTo. */
+  readonly coefficients: number;
+  /** SHA-256 (lower-case hex) of the canonical list of those positions and values. */
+  readonly sha256: string;
+  readonly grid: CoefficientGrid;
 }
 
 export interface Verdict {
@@ -68,6 +111,15 @@ export interface Verdict {
   readonly diagnostics?: readonly Diagnostic[];
   /** The source text of the claim, for reports. */
   readonly claimText?: string;
+  /** Which relation the claim states (claims only; absent for file-level errors). */
+  readonly relation?: 'identity' | 'type';
+  /** The expansions compared, when evidence is recorded. */
+  readonly evidence?: ComparisonEvidence;
+  /**
+   * The source text of every statement the claim depends on (variables, lattices,
+   * definitions, assumptions), in file order, when evidence is recorded.
+   */
+  readonly closure?: string;
 }
 
 /** Whether a verdict is what its claim expected (CLAIMS.md, exit status of check). */

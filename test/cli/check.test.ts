@@ -108,16 +108,6 @@ describe('check: exit status', () => {
     expect(r.stderr).toContain('at least one PATH');
   });
 
-  it.each([
-    [['--format', 'junit']],
-    [['--report', 'out.html']],
-    [['--certificates', 'certs']],
-  ])('2 for %j: not available yet', async (opt) => {
-    const r = await cli('check', ...opt, ALL_AS_EXPECTED);
-    expect(r.code).toBe(2);
-    expect(r.stderr).toContain('not available in this version yet');
-  });
-
   it('2 for a path that cannot be read', async () => {
     const path = file('locked/secret.claim', 'claim: E_4 == E_4\n');
     chmodSync(path, 0o000);

@@ -4,8 +4,8 @@ import { REPORTERS } from '../../src/report/index.js';
 import { optionSpec } from '../../src/cli/options.js';
 
 describe('reporters', () => {
-  it('text and json exist; junit is not built yet', () => {
-    expect([...REPORTERS.keys()]).toEqual(['text', 'json']);
+  it('text, json and junit exist', () => {
+    expect([...REPORTERS.keys()]).toEqual(['text', 'json', 'junit']);
   });
 
   it('every reporter is a choice of --format', () => {

@@ -1,13 +1,14 @@
 /**
  * `sturmcheck [check] PATH…` (CLAIMS.md): discover the claim files, check every
  * claim in order, render the report in the chosen format to stdout or `--output`,
- * and decide the exit status: 2 when the command could not do all it was asked
- * (it wins), else 1 when a claim missed its expected verdict, else 0.
+ * write the HTML report (`--report`) and the certificates (`--certificates`) when
+ * asked, and decide the exit status: 2 when the command could not do all it was
+ * asked (it wins), else 1 when a claim missed its expected verdict, else 0.
  */
 import { resolve } from 'node:path';
 import { DEFAULT_CHECK_OPTIONS, type CheckOptions } from '../../check/index.js';
 import { summarize, type Verdict } from '../../verdict/index.js';
-import { REPORTERS, type Reporter } from '../../report/index.js';
+import { REPORTERS, htmlReporter, type Reporter, type ReportInput } from '../../report/index.js';
 import type { ParsedArgs } from '../parse-args.js';
 import { type CliIo, EXIT_FAILED, EXIT_OK, EXIT_USAGE } from '../io.js';
 import { DEFAULT_DEPTH, DEFAULT_MAX_TERMS } from '../options.js';
@@ -17,9 +18,7 @@ import { checkPath } from '../check-path.js';
 import { startProgress } from '../spinner.js';
 import { wantsColor } from '../color.js';
 import { writeFileAtomic } from '../atomic-write.js';
-
-/** Options the table accepts for `check` whose feature is not built yet. */
-const NOT_YET = ['report', 'certificates'] as const;
+import { writeCertificates } from '../write-certificates.js';
 
 function usageError(io: CliIo, message: string): number {
   io.stderr(`sturmcheck: ${message}\n(see sturmcheck check --help)\n`);
@@ -31,7 +30,9 @@ function checkOptions(args: ParsedArgs): CheckOptions {
     const v = args.options.get(name);
     return typeof v === 'number' ? v : fallback;
   };
-  return { ...DEFAULT_CHECK_OPTIONS, maxTerms: num('max-terms', DEFAULT_MAX_TERMS), depth: num('depth', DEFAULT_DEPTH) };
+  // Certificates and the HTML report need the compared coefficients; a plain run skips that work.
+  const evidence = typeof args.options.get('certificates') === 'string' || typeof args.options.get('report') === 'string';
+  return { ...DEFAULT_CHECK_OPTIONS, maxTerms: num('max-terms', DEFAULT_MAX_TERMS), depth: num('depth', DEFAULT_DEPTH), evidence };
 }
 
 /** The reporter for `--format`, or the reason there is none. */
@@ -68,24 +69,42 @@ function checkAll(args: ParsedArgs, io: CliIo, color: boolean): Run {
   return run;
 }
 
-/** Writes the report; false (after saying why) when the output file cannot be written. */
+/** Writes a file atomically; false (after saying why) when it cannot be written. */
+function writeOutput(io: CliIo, path: string, text: string): boolean {
+  try {
+    writeFileAtomic(resolve(io.cwd, path), text);
+    return true;
+  } catch (e) {
+    io.stderr(`sturmcheck: cannot write ${path}: ${e instanceof Error ? e.message : String(e)}\n`);
+    return false;
+  }
+}
+
+/** Writes the report to stdout or `--output`; false when the output file cannot be written. */
 function deliver(args: ParsedArgs, io: CliIo, text: string): boolean {
   const output = args.options.get('output');
   if (typeof output !== 'string') {
     io.stdout(text);
     return true;
   }
-  try {
-    writeFileAtomic(resolve(io.cwd, output), text);
-    return true;
-  } catch (e) {
-    io.stderr(`sturmcheck: cannot write ${output}: ${e instanceof Error ? e.message : String(e)}\n`);
-    return false;
+  return writeOutput(io, output, text);
+}
+
+/** `--report FILE.html` and `--certificates DIR`; false when something could not be written. */
+function writeExtras(args: ParsedArgs, io: CliIo, input: ReportInput): boolean {
+  let ok = true;
+  const report = args.options.get('report');
+  if (typeof report === 'string') ok = writeOutput(io, report, htmlReporter.render(input, { color: false, verbose: true })) && ok;
+  const dir = args.options.get('certificates');
+  if (typeof dir === 'string') {
+    const result = writeCertificates(resolve(io.cwd, dir), input.verdicts, input.toolVersion);
+    for (const p of result.problems) io.stderr(`sturmcheck: ${p}\n`);
+    ok = result.problems.length === 0 && ok;
   }
+  return ok;
 }
 
 export function runCheck(args: ParsedArgs, io: CliIo): number {
-  for (const name of NOT_YET) if (args.options.has(name)) return usageError(io, `--${name} is not available in this version yet`);
   const reporter = chooseReporter(args);
   if (typeof reporter === 'string') return usageError(io, reporter);
   if (args.positionals.length === 0) return usageError(io, 'check needs at least one PATH (a .claim file or a folder)');
@@ -94,8 +113,9 @@ export function runCheck(args: ParsedArgs, io: CliIo): number {
   const run = checkAll(args, io, wantsColor(args, io, io.stderrIsTerminal));
   for (const p of run.problems) io.stderr(`sturmcheck: ${p}\n`);
   const style = { color: stdoutColor, verbose: args.options.get('verbose') === true };
-  const text = reporter.render({ verdicts: run.verdicts, sources: run.sources, toolVersion: toolVersion() }, style);
-  const written = deliver(args, io, text);
-  if (run.problems.length > 0 || !written) return EXIT_USAGE;
+  const input: ReportInput = { verdicts: run.verdicts, sources: run.sources, toolVersion: toolVersion() };
+  const written = deliver(args, io, reporter.render(input, style));
+  const extras = writeExtras(args, io, input);
+  if (run.problems.length > 0 || !written || !extras) return EXIT_USAGE;
   return summarize(run.verdicts).asExpected ? EXIT_OK : EXIT_FAILED;
 }
