@@ -5,6 +5,8 @@
  * file, everything runs in this thread and the spinner can name each claim.
  */
 import { Worker } from 'node:worker_threads';
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import { checkPath, type PathResult } from './check-path.js';
 import type { ClaimFilePath } from './discover.js';
 import type { CheckListener, CheckOptions } from '../check/index.js';
@@ -16,7 +18,9 @@ export async function checkPaths(
   listener: CheckListener,
   fileStarted: (path: ClaimFilePath) => void = () => undefined,
 ): Promise<PathResult[]> {
-  const workers = Math.min(jobs, paths.length);
+  const workerScript = new URL('./check-worker.js', import.meta.url);
+  // Run from the TypeScript sources (the tests), there is no compiled worker: stay in-process.
+  const workers = existsSync(fileURLToPath(workerScript)) ? Math.min(jobs, paths.length) : 1;
   if (workers <= 1) {
     return paths.map((p) => {
       fileStarted(p);
@@ -27,7 +31,7 @@ export async function checkPaths(
   let next = 0;
   const runWorker = (): Promise<void> =>
     new Promise((resolve) => {
-      const w = new Worker(new URL('./check-worker.js', import.meta.url), { workerData: { opts } });
+      const w = new Worker(workerScript, { workerData: { opts } });
       let current = -1;
       const feed = (): void => {
         if (next >= paths.length) {

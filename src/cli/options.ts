@@ -28,7 +28,7 @@ export const OPTIONS: readonly OptionSpec[] = [
   { name: 'output', kind: 'string', commands: ['check'], value: 'FILE', help: 'write the report to FILE instead of standard output' },
   { name: 'report', kind: 'string', commands: ['check'], value: 'FILE.html', help: 'also write a self-contained HTML report with coefficient grids' },
   { name: 'certificates', kind: 'string', commands: ['check'], value: 'DIR', help: 'write one JSON certificate per proved claim into DIR (created if missing; see sturmcheck recheck)' },
-  { name: 'jobs', kind: 'integer', commands: ['check'], value: 'N', min: 1, help: 'worker threads; accepted, but for now claims are checked in-process, one after another, in file order', defaultText: '1' },
+  { name: 'jobs', kind: 'integer', commands: ['check'], value: 'N', min: 1, help: 'check claim files in N worker threads; the report keeps file order', defaultText: 'number of cores' },
   { name: 'depth', kind: 'integer', commands: ['check'], value: 'N', min: 0, help: 'q-steps past the nominal bound compared for unproved claims', defaultText: '10' },
   { name: 'verbose', kind: 'flag', commands: ['check', 'type'], help: 'show types and the derivation of each bound' },
   { name: 'no-color', kind: 'flag', commands: ALL, help: 'no colour (also when NO_COLOR is set)' },

@@ -31,7 +31,7 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
       case 'expand':
         return runExpand(args, io);
       case 'check':
-        return runCheck(args, io);
+        return await runCheck(args, io);
       case 'type':
         return runType(args, io);
       case 'recheck':

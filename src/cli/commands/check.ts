@@ -6,6 +6,7 @@
  * asked (it wins), else 1 when a claim missed its expected verdict, else 0.
  */
 import { resolve } from 'node:path';
+import { availableParallelism } from 'node:os';
 import { DEFAULT_CHECK_OPTIONS, type CheckOptions } from '../../check/index.js';
 import { summarize, type Verdict } from '../../verdict/index.js';
 import { REPORTERS, htmlReporter, type Reporter, type ReportInput } from '../../report/index.js';
@@ -14,7 +15,7 @@ import { type CliIo, EXIT_FAILED, EXIT_OK, EXIT_USAGE } from '../io.js';
 import { DEFAULT_DEPTH, DEFAULT_MAX_TERMS } from '../options.js';
 import { toolVersion } from '../version.js';
 import { discoverClaimFiles } from '../discover.js';
-import { checkPath } from '../check-path.js';
+import { checkPaths } from '../check-pool.js';
 import { startProgress } from '../spinner.js';
 import { wantsColor } from '../color.js';
 import { writeFileAtomic } from '../atomic-write.js';
@@ -48,21 +49,29 @@ interface Run {
   readonly problems: string[];
 }
 
-function checkAll(args: ParsedArgs, io: CliIo, color: boolean): Run {
+/** `--jobs N`, by default the number of cores. */
+function jobsOption(args: ParsedArgs): number {
+  const v = args.options.get('jobs');
+  return typeof v === 'number' ? v : availableParallelism();
+}
+
+async function checkAll(args: ParsedArgs, io: CliIo, color: boolean): Promise<Run> {
   const discovery = discoverClaimFiles(args.positionals, io.cwd);
   const run: Run = { verdicts: [], sources: new Map(), problems: [...discovery.problems] };
   const progress = startProgress(io, color);
   try {
     const opts = checkOptions(args);
-    for (const file of discovery.files) {
-      const result = checkPath(file, opts, { claimStarted: progress.claimStarted });
+    const results = await checkPaths(discovery.files, opts, jobsOption(args), { claimStarted: progress.claimStarted }, (file) =>
+      progress.claimStarted(file.display),
+    );
+    results.forEach((result, i) => {
       if (!result.ok) {
         run.problems.push(result.problem);
-        continue;
+        return;
       }
       run.verdicts.push(...result.verdicts);
-      run.sources.set(file.display, result.text);
-    }
+      run.sources.set(discovery.files[i]!.display, result.text);
+    });
   } finally {
     progress.stop();
   }
@@ -104,13 +113,13 @@ function writeExtras(args: ParsedArgs, io: CliIo, input: ReportInput): boolean {
   return ok;
 }
 
-export function runCheck(args: ParsedArgs, io: CliIo): number {
+export async function runCheck(args: ParsedArgs, io: CliIo): Promise<number> {
   const reporter = chooseReporter(args);
   if (typeof reporter === 'string') return usageError(io, reporter);
   if (args.positionals.length === 0) return usageError(io, 'check needs at least one PATH (a .claim file or a folder)');
   const toFile = typeof args.options.get('output') === 'string';
   const stdoutColor = wantsColor(args, io, !toFile && io.stdoutIsTerminal);
-  const run = checkAll(args, io, wantsColor(args, io, io.stderrIsTerminal));
+  const run = await checkAll(args, io, wantsColor(args, io, io.stderrIsTerminal));
   for (const p of run.problems) io.stderr(`sturmcheck: ${p}\n`);
   const style = { color: stdoutColor, verbose: args.options.get('verbose') === true };
   const input: ReportInput = { verdicts: run.verdicts, sources: run.sources, toolVersion: toolVersion() };
