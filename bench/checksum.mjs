@@ -13,7 +13,6 @@
  * project card prefers JSBI to native bigint); nothing here is on a timed path.
  */
 import JSBI from 'jsbi';
-import { forEachTerm, sliceIsZero } from '../dist/series/index.js';
 
 export const P = JSBI.BigInt('2305843009213693951'); // 2^61 − 1
 const ZERO = JSBI.BigInt(0);
@@ -60,6 +59,22 @@ export function powMod(base, n) {
  * non-zero slice (−1 for the zero series). Throws if den ≠ 1 or a non-zero slice
  * lies off the integer-step grid of the leading power.
  */
+/** Whether a slice (dense `{ lo, c }` or sparse `{ kind: 'sparse', exps, vals }`) is zero. */
+function sliceIsZero(s) {
+  return s.kind === 'sparse' ? s.vals.length === 0 : s.c.every((v) => JSBI.equal(v, ZERO));
+}
+
+/** Calls f(exponent vector in halves, numerator) for every non-zero term of a slice. */
+function forEachTerm(s, f) {
+  if (s.kind === 'sparse') {
+    s.vals.forEach((v, i) => f(s.exps[i], v));
+    return;
+  }
+  s.c.forEach((v, k) => {
+    if (!JSBI.equal(v, ZERO)) f([s.lo + k], v);
+  });
+}
+
 export function seriesChecksum(series, originIndex = null) {
   if (!JSBI.equal(series.den, ONE)) {
     throw new Error(`checksum needs integer coefficients, got denominator ${series.den.toString()}`);

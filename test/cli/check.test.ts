@@ -195,9 +195,9 @@ describe('check: options', () => {
     expect(r.stderr).toContain('cannot write');
   });
 
-  it('--help mentions that claims run in-process for now', async () => {
+  it('--help lists --jobs from the option table', async () => {
     const r = await cli('check', '--help');
-    expect(r.stdout).toContain('in-process');
+    expect(r.stdout).toMatch(/--jobs N\s+check claim files in N worker threads; the report keeps file order \(default: number of cores\)/);
   });
 });
 
