@@ -88,3 +88,17 @@ describe('the dispatcher sends long products to the modular route, exactly', () 
     expect(choosePolyAlgorithm(big, big)).toBe('modular');
   });
 });
+
+describe('the NTT prime table', () => {
+  it('holds primes p = c·2^20 + 1 < 2^30 with primitive roots (common practice, no source)', async () => {
+    const { powmod } = await import('../../src/series/modular/mulmod.js');
+    const primes = nttPrimes();
+    for (const { p, g } of primes) {
+      expect(p % 2 ** 20).toBe(1);
+      expect(p).toBeLessThan(2 ** 30);
+      for (let d = 2; d * d <= p; d += d === 2 ? 1 : 2) expect(p % d, `${p} divisible by ${d}`).not.toBe(0);
+      // a primitive root is a quadratic non-residue: g^((p−1)/2) = −1
+      expect(powmod(g, (p - 1) / 2, p)).toBe(p - 1);
+    }
+  });
+});

@@ -64,7 +64,7 @@ export function primesFor(heightBits: number): NttPrime[] | null {
   const all = nttPrimes();
   const chosen: NttPrime[] = [];
   let bits = 0;
-  // each prime exceeds 2^29, so 29 bits per prime is a safe count of log2 M
+  // ⌊log2 p⌋ per prime never over-counts log2 M
   for (const pr of all) {
     if (bits >= heightBits + 2) break;
     chosen.push(pr);

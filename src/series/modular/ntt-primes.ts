@@ -14,9 +14,24 @@ export interface NttPrime {
   readonly g: number;
 }
 
-function isPrime(n: number): boolean {
+/** The primes up to √(2^30) by a sieve, for trial division of the candidates. */
+function smallPrimes(limit: number): number[] {
+  const composite = new Uint8Array(limit + 1);
+  const out: number[] = [];
+  for (let i = 2; i <= limit; i++) {
+    if (composite[i]) continue;
+    out.push(i);
+    for (let j = i * i; j <= limit; j += i) composite[j] = 1;
+  }
+  return out;
+}
+
+function isPrime(n: number, divisors: readonly number[]): boolean {
   if (n < 2) return false;
-  for (let d = 2; d * d <= n; d++) if (n % d === 0) return false;
+  for (const d of divisors) {
+    if (d * d > n) return true;
+    if (n % d === 0) return n === d;
+  }
   return true;
 }
 
@@ -45,9 +60,10 @@ export function nttPrimes(): readonly NttPrime[] {
   if (cache !== null) return cache;
   const out: NttPrime[] = [];
   const step = 2 ** NTT_MAX_LOG;
+  const divisors = smallPrimes(2 ** 15);
   for (let c = Math.floor((2 ** 30 - 2) / step); c >= 1; c--) {
     const p = c * step + 1;
-    if (isPrime(p)) out.push({ p, g: primitiveRoot(p) });
+    if (isPrime(p, divisors)) out.push({ p, g: primitiveRoot(p) });
   }
   cache = out;
   return out;
