@@ -36,6 +36,20 @@ describe('series multiplication algorithms agree with schoolbook', () => {
       { seed: SEED, numRuns: 150 },
     );
   });
+  it('sparse × dense in doubles when the height allows it, including near 2^53', () => {
+    // small coefficients take the double-precision path (Σ|a|·max|b| < 2^53); 26-bit ones
+    // with a few terms sit near the limit on either side of it
+    for (const bits of [8, 24, 26]) {
+      const small = seriesArbitrary({ slices: 9, width: 7, density: 0.15, bits });
+      const wide = seriesArbitrary({ slices: 9, width: 7, density: 0.9, bits });
+      fc.assert(
+        fc.property(small, wide, (a, b) => {
+          expect(seriesKey(mulSparseDense(a, b))).toBe(seriesKey(mulSchoolbook(a, b)));
+        }),
+        { seed: SEED, numRuns: 60 },
+      );
+    }
+  });
   it('Kronecker substitution with Karatsuba', () => {
     fc.assert(
       fc.property(dense, dense, (a, b) => {
