@@ -74,7 +74,7 @@ export function eisensteinAtom(k: number, n: number): Atom {
       kind: 'other',
       type: eisensteinType(k, n),
       cls: k === 2 ? 'quasi' : 'modular',
-      quasiReason: k === 2 ? 'E_2 is quasi-modular (MATH.md §5)' : null,
+      quasiReason: k === 2 ? 'E_2 is quasi-modular' : null,
       valuationExact: true,
       thetaL: null,
     },

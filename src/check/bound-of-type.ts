@@ -25,7 +25,7 @@ export function boundFor(t: ModularType): TypeBound {
     return {
       theorem: 'A',
       qOrder: X,
-      derivation: `(K + 2m)/12 with K = ${rationalToString(t.weight)}, m = ${mText}: q-order ${rationalToString(X)} (Theorem A, MATH.md §6)`,
+      derivation: `(K + 2m)/12 with K = ${rationalToString(t.weight)}, m = ${mText}: q-order ${rationalToString(X)} (Theorem A)`,
     };
   }
   try {

@@ -146,10 +146,10 @@ export function checkAssertion(expr: Expr, spec: TypeSpec, ctx: EvalContext, opt
   if (cls === 'meromorphic') return meromorphicAssertion(m, opts, nvars);
   const property = spec.qualifier;
   if (property === null) {
-    return { verdict: 'proved', type, reason: `${formatType(declared)} by the type rules (MATH.md §3); holomorphic on H × C by construction` };
+    return { verdict: 'proved', type, reason: `${formatType(declared)} by the type rules; holomorphic on H × C by construction` };
   }
   const decides = criterion(property, inferred);
-  if (decides === null) return { verdict: 'unproved', type, reason: `${property}: deciding it needs a positive definite index (MATH.md §6)` };
+  if (decides === null) return { verdict: 'unproved', type, reason: `${property}: deciding it needs a positive definite index` };
   const norm = zetaNormFor(inferred);
   for (const p of property === 'weak' ? (['weak'] as const) : (['weak', property] as const)) {
     const bad = firstForbidden(m, p, p === property ? decides : criterion('weak', inferred)!, norm);
@@ -160,7 +160,7 @@ export function checkAssertion(expr: Expr, spec: TypeSpec, ctx: EvalContext, opt
   return {
     verdict: 'proved',
     type,
-    reason: `${property}: every coefficient it forbids vanishes, decided by those with ${decides.describe} (MATH.md §6)`,
+    reason: `${property}: every coefficient it forbids vanishes, decided by those with ${decides.describe}`,
   };
 }
 
@@ -173,14 +173,14 @@ function meromorphicAssertion(m: Monomial, opts: CheckOptions, nvars: number): O
   const qSeries = qs.expand(radd(X, qs.valuation));
   const lead = qSeries.slices.find((s) => !sliceIsZero(s));
   const monic = JSBI.equal(qSeries.den, ONE) && lead !== undefined && hasUnitLead(lead);
-  if (!monic) return { verdict: 'unproved', type, reason: 'a quotient by a non-unit: its holomorphy is not proven (MATH.md §4)' };
+  if (!monic) return { verdict: 'unproved', type, reason: 'a quotient by a non-unit: its holomorphy is not proven' };
   const g = divideExact(numeratorSource(N).expand(radd(X, qs.valuation)), qSeries);
   if (g === null) {
-    return { verdict: 'refuted', type, reason: 'the quotient does not divide exactly slice by slice: it has a pole in z (MATH.md §4, item 4)' };
+    return { verdict: 'refuted', type, reason: 'the quotient does not divide exactly slice by slice: it has a pole in z' };
   }
   return {
     verdict: 'unproved',
     type,
-    reason: `a quotient by a non-unit: it divides exactly up to ${powerText('q', X, false)}, but holomorphy is not proven (MATH.md §4)`,
+    reason: `a quotient by a non-unit: it divides exactly up to ${powerText('q', X, false)}, but holomorphy is not proven`,
   };
 }

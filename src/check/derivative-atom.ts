@@ -22,7 +22,7 @@ export function derivativeMonomial(op: 'Dq' | 'Dz', m: Monomial, nvars: number, 
   }
   const t = monomialType(m, nvars)!;
   const inner = monomialText(m);
-  const reason = `${op}(${inner}) is a bare derivative, quasi-modular (MATH.md §5)`;
+  const reason = `${op}(${inner}) is a bare derivative, quasi-modular`;
   const base = numeratorSource(m, parts);
   const atom: Atom = {
     key: `${op}(${inner})`,

@@ -35,7 +35,7 @@ export function latticeThetaAtom(name: string, G: readonly (readonly number[])[]
   };
   const reason = unimodular
     ? null
-    : `Theta[${name}] has level ${latticeLevel(G)} (det G = ${rationalToString(det)}); level N is not covered by Theorems A and B, so it has no proven type here (MATH.md §6)`;
+    : `Theta[${name}] has level ${latticeLevel(G)} (det G = ${rationalToString(det)}); level N is not covered by Theorems A and B, so it has no proven type here`;
   const atom: Atom = {
     key: `Theta[${name}]`,
     kind: 'other',

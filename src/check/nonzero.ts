@@ -26,7 +26,7 @@ export function assertDivisorNonZero(atom: Atom, span: Span | null, depth: numbe
   }
   if (proven) {
     throw evalError(evalCodes.divisionByZero, { what: atom.key }, span, [
-      `all its coefficients up to ${powerText('q', X, false)} vanish, and that is its Theorem A bound (MATH.md §6)`,
+      `all its coefficients up to ${powerText('q', X, false)} vanish, and that is its Theorem A bound`,
     ]);
   }
   throw evalError(evalCodes.divisorNotShownNonZero, { what: atom.key, order: rationalToString(X) }, span);

@@ -51,7 +51,7 @@ function operatorAtom(key: string, type: ModularType, inputs: readonly Input[], 
     kind: 'other',
     type,
     cls: quasi ? 'quasi' : 'modular',
-    quasiReason: quasi ? [`${opName} of a quasi-modular input has no proven type (MATH.md §5)`, ...reasons].join('; ') : null,
+    quasiReason: quasi ? [`${opName} of a quasi-modular input has no proven type`, ...reasons].join('; ') : null,
     source,
     valuationExact: false,
     thetaL: null,
@@ -126,7 +126,7 @@ export function heckeTMonomial(m: Monomial, p: number, nvars: number, span: Span
   precondition(isPrime(p), `T_${p}`, 'p prime', f.type, span);
   const index = scalarIndexOf(f.type);
   if (!req(index, rat(1))) {
-    throw evalError(evalCodes.notYetSupported, { what: `T_${p} on index ${rationalToString(index)} (only index 1 has a published formula built in, MATH.md §7)` }, span);
+    throw evalError(evalCodes.notYetSupported, { what: `T_${p} on index ${rationalToString(index)} (only index 1 has a published formula built in)` }, span);
   }
   const k = toNumber(f.type.weight.num);
   return operatorAtom(`T_${p}(${monomialText(m)})`, f.type, [f], heckeTSource(f.source, k, p), `T_${p}`);

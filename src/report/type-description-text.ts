@@ -29,9 +29,9 @@ function boundLines(d: TypeDescription): [string, string][] {
   if (d.bound === null) return [['bound', d.type === null ? 'none needed' : 'none']];
   const of =
     d.cls === 'quasi'
-      ? ' (nominal: a quasi-modular claim is compared past it and is at best unproved, MATH.md §5)'
+      ? ' (nominal: a quasi-modular claim is compared past it and is at best unproved)'
       : d.denominators.length > 0
-        ? ' (of the numerator after clearing the divisors, MATH.md §4)'
+        ? ' (of the numerator after clearing the divisors)'
         : '';
   return [
     ['bound', `q-order ${rationalToString(d.bound)}${of}`],
@@ -46,7 +46,7 @@ export function typeDescriptionText(expression: string, d: TypeDescription, verb
     ['type', typeLine(d)],
     ['class', classLine(d)],
     ['divisors', d.denominators.length === 0 ? 'none' : d.denominators.join(', ')],
-    ['theta block', d.thetaBlock === null ? 'none' : `${d.thetaBlock}: holomorphic by the divisor rule (MATH.md §3)`],
+    ['theta block', d.thetaBlock === null ? 'none' : `${d.thetaBlock}: holomorphic by the divisor rule`],
   );
   if (d.type !== null) rows.push(['heisenberg', heisenbergLine(d)]);
   d.operators.forEach((step, i) => rows.push([i === 0 ? 'operators' : '', `${step.text}: ${step.input} → ${step.output}`]));
