@@ -59,38 +59,29 @@ describe('theta blocks: coefficients and the exact criterion agree', () => {
     { e0: 1, factors: [{ a: 1, exponent: -1 }, { a: 2, exponent: 1 }] },
     { e0: -8, factors: [{ a: 1, exponent: 1 }] },
   ];
+  /** The checker's verdicts on weak / holomorphic / cusp must be those the exact class implies. */
+  function agreeOn(b: Block): string {
+    const exact = thetaBlockClass(b.e0, b.factors);
+    const verdicts = ['weak', 'holomorphic', 'cusp'].map((q) => checkOne(`${blockText(b)} is ${typeText(b)} ${q}`).verdict);
+    const expected = {
+      'not weak': ['refuted', 'refuted', 'refuted'],
+      weak: ['proved', 'refuted', 'refuted'],
+      holomorphic: ['proved', 'proved', 'refuted'],
+      cusp: ['proved', 'proved', 'proved'],
+    }[exact];
+    expect(verdicts, `${blockText(b)}: exact says ${exact}`).toEqual(expected);
+    return exact;
+  }
+
   it('on blocks at the boundary between the classes', () => {
-    const seen = new Set<string>();
-    for (const b of BOUNDARY) {
-      const exact = thetaBlockClass(b.e0, b.factors);
-      seen.add(exact);
-      const verdicts = ['weak', 'holomorphic', 'cusp'].map((q) => checkOne(`${blockText(b)} is ${typeText(b)} ${q}`).verdict);
-      const expected = {
-        'not weak': ['refuted', 'refuted', 'refuted'],
-        weak: ['proved', 'refuted', 'refuted'],
-        holomorphic: ['proved', 'proved', 'refuted'],
-        cusp: ['proved', 'proved', 'proved'],
-      }[exact];
-      expect(verdicts, `${blockText(b)}: exact says ${exact}`).toEqual(expected);
-    }
+    const seen = new Set(BOUNDARY.map(agreeOn));
     expect([...seen].sort()).toEqual(['cusp', 'holomorphic', 'not weak', 'weak']);
   });
 
   it('on random blocks η^{e₀}Πϑ(a z)^{e_a}, a ≤ 4, holomorphic in z', () => {
     fc.assert(
       fc.property(blockArb, (b) => {
-        const exact = thetaBlockClass(b.e0, b.factors);
-        const claim = (q: string): string => checkOne(`${blockText(b)} is ${typeText(b)} ${q}`).verdict;
-        const weak = claim('weak');
-        const holo = claim('holomorphic');
-        const cusp = claim('cusp');
-        const expected = {
-          'not weak': ['refuted', 'refuted', 'refuted'],
-          weak: ['proved', 'refuted', 'refuted'],
-          holomorphic: ['proved', 'proved', 'refuted'],
-          cusp: ['proved', 'proved', 'proved'],
-        }[exact];
-        expect([weak, holo, cusp], `${blockText(b)}: exact says ${exact}`).toEqual(expected);
+        agreeOn(b);
       }),
       { seed: 2026, numRuns: 40 },
     );
