@@ -4,9 +4,9 @@
  * non-unit divisor are refused (op(N/Q) ≠ op(N)/Q). Failed preconditions are errors
  * naming the condition.
  */
-import { type Rational, type SeriesSource, rat, radd, rmul, rIsInteger, rIsZero, toNumber, req, rationalToString } from '../series/index.js';
+import { type Rational, type SeriesSource, rat, radd, rmul, rIsInteger, toNumber, req, rationalToString } from '../series/index.js';
 import type { Span } from '../lang/span.js';
-import { type ModularType, typeProduct, scalarIndexOf, scalarIndex, indexIsZero, formatType } from '../types/index.js';
+import { type ModularType, typeProduct, scalarIndexOf, scalarIndex, indexIsZero, formatType, matrixInverse } from '../types/index.js';
 import { serreSource, heatSource, rankinCohenSource } from '../forms/differential-operators.js';
 import { taylorSource } from '../forms/taylor-coefficient.js';
 import { heckeVSource } from '../forms/hecke-v.js';
@@ -69,17 +69,17 @@ export function serreMonomial(m: Monomial, nvars: number, span: Span | null): Mo
   const f = input('serre', m, nvars, span);
   precondition(indexIsZero(f.type.index), 'serre', 'index 0', f.type, span);
   const type = { ...f.type, weight: radd(f.type.weight, rat(2)) };
-  return operatorAtom(`serre(${monomialText(m)})`, type, [f], serreSource(f.source, f.type.weight), 'serre');
+  return operatorAtom(`serre(${monomialText(m)})`, type, [f], serreSource(f.source, f.type.weight, nvars), 'serre');
 }
 
 export function heatMonomial(m: Monomial, nvars: number, span: Span | null): Monomial {
   if (isZeroMonomial(m)) return ZERO_MONOMIAL;
   const f = input('heat', m, nvars, span);
-  precondition(nvars === 1, 'heat', 'one variable', f.type, span);
-  const index = scalarIndexOf(f.type);
-  precondition(!rIsZero(index), 'heat', 'a non-zero index (use serre on index 0)', f.type, span);
+  // MATH.md §5: the heat operator needs an invertible index (on index 0 use serre)
+  const inv = indexIsZero(f.type.index) ? null : matrixInverse(f.type.index);
+  precondition(inv !== null, 'heat', nvars === 1 ? 'a non-zero index (use serre on index 0)' : 'an invertible index matrix', f.type, span);
   const type = { ...f.type, weight: radd(f.type.weight, rat(2)) };
-  return operatorAtom(`heat(${monomialText(m)})`, type, [f], heatSource(f.source, f.type.weight, index), 'heat');
+  return operatorAtom(`heat(${monomialText(m)})`, type, [f], heatSource(f.source, f.type.weight, inv!), 'heat');
 }
 
 export function taylorMonomial(m: Monomial, nu: number, nvars: number, span: Span | null): Monomial {

@@ -20,6 +20,7 @@ import {
   rsub,
   rIsZero,
   mapSource,
+  liftQSeries,
   sumSource,
   productSource,
   derivativeQ,
@@ -28,19 +29,33 @@ import {
 } from '../series/index.js';
 import { eisensteinSource } from './leaves.js';
 
-export function serreSource(f: SeriesSource, k: Rational): SeriesSource {
+/** ∂_k f in a file with n variables (f of index 0, so constant in ζ). */
+export function serreSource(f: SeriesSource, k: Rational, n = 1): SeriesSource {
   return sumSource([
     { source: mapSource(f, derivativeQ), coefficient: rat(1) },
-    { source: productSource([eisensteinSource(2), f]), coefficient: rneg(rdiv(k, rat(12))) },
+    { source: productSource([liftQSeries(eisensteinSource(2), n), f]), coefficient: rneg(rdiv(k, rat(12))) },
   ]);
 }
 
-export function heatSource(f: SeriesSource, k: Rational, m: Rational): SeriesSource {
-  return sumSource([
+/**
+ * The heat operator for an invertible index matrix M of size n (MATH.md §5):
+ *   H f = D_q f − ¼ Σ_{ij} (M⁻¹)_{ij} D_{ζ_i}D_{ζ_j} f − ((2k − n)/24)·E_2·f;
+ * one variable (n = 1, M⁻¹ = 1/m) is the formula above.
+ */
+export function heatSource(f: SeriesSource, k: Rational, Minv: readonly (readonly Rational[])[]): SeriesSource {
+  const n = Minv.length;
+  const terms: WeightedSource[] = [
     { source: mapSource(f, derivativeQ), coefficient: rat(1) },
-    { source: mapSource(f, (s) => derivativeZeta(derivativeZeta(s))), coefficient: rneg(rdiv(rat(1), rmul(rat(4), m))) },
-    { source: productSource([eisensteinSource(2), f]), coefficient: rneg(rdiv(rsub(rmul(rat(2), k), rat(1)), rat(24))) },
-  ]);
+    { source: productSource([liftQSeries(eisensteinSource(2), n), f]), coefficient: rneg(rdiv(rsub(rmul(rat(2), k), rat(n)), rat(24))) },
+  ];
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) {
+      const c = Minv[i]![j]!;
+      if (rIsZero(c)) continue;
+      terms.push({ source: mapSource(f, (s) => derivativeZeta(derivativeZeta(s, j), i)), coefficient: rneg(rdiv(c, rat(4))) });
+    }
+  }
+  return sumSource(terms);
 }
 
 /** The generalised binomial coefficient C(a, b) for rational a and an integer b ≥ 0. */

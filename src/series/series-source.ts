@@ -14,6 +14,7 @@ import { multiplySeries } from './multiply.js';
 import { powerSeries } from './power.js';
 import { linearCombination } from './add.js';
 import { divideExact } from './divide-exact.js';
+import { substituteLinear } from './substitute.js';
 
 export interface SeriesSource {
   /** A lower bound of the valuation; exact where the source says so. */
@@ -108,4 +109,11 @@ export function quotientSource(
       return truncateSeries(g, X);
     },
   };
+}
+
+/** A series in one variable with no ζ-terms (a q-series) seen as a series in n variables. */
+export function liftQSeries(s: SeriesSource, n: number): SeriesSource {
+  if (n === 1) return s;
+  const zero = [new Array<number>(n).fill(0)];
+  return mapSource(s, (x) => substituteLinear(x, zero));
 }

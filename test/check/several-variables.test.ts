@@ -192,3 +192,23 @@ describe('theta products in two variables', () => {
     ]);
   });
 });
+
+describe('operators in several variables', () => {
+  it('the heat operator with an index matrix (MATH.md §5): theta products are killed, products follow the Leibniz rule', () => {
+    // each ϑ(z_i) satisfies D_qϑ = ½D_ζ²ϑ (MATH.md §5 check), and (2k − n)/24 = 0 for ϑ(z1)ϑ(z2)
+    const vs = checkText(
+      'variables z1, z2\nclaim "theta": heat(theta(z1)*theta(z2)) == 0\nclaim "leibniz": heat(phi_{-2,1}(z1)*phi_{-2,1}(z2)) == -(phi_{0,1}(z1)*phi_{-2,1}(z2) + phi_{-2,1}(z1)*phi_{0,1}(z2))/24\nclaim "wrong": heat(phi_{-2,1}(z1)*phi_{-2,1}(z2)) == -(phi_{0,1}(z1)*phi_{-2,1}(z2) + phi_{-2,1}(z1)*phi_{0,1}(z2))/12\nclaim "singular": heat(theta(z1 + z2)) == 0\n',
+    );
+    expect(vs.map((v) => [v.name, v.verdict])).toEqual([
+      ['theta', 'proved'],
+      ['leibniz', 'proved'], // Hφ_{−2,1} = −φ_{0,1}/24 in each variable (test/check/operators.test.ts)
+      ['wrong', 'refuted'],
+      ['singular', 'error'], // the heat operator needs an invertible index
+    ]);
+  });
+  it('the Serre derivative of an index-0 form in a two-variable file', () => {
+    const v = checkText('variables z1, z2\nclaim: serre(E_4) == -E_6/3\n')[0]!; // Ramanujan 1916
+    expect(v.verdict).toBe('proved');
+  });
+});
+
