@@ -20,6 +20,7 @@ import {
   sliceIsZero,
   hasUnitLead,
   forEachTerm,
+  lexCompare,
 } from '../series/index.js';
 import type { Expr, TypeSpec } from '../lang/ast.js';
 import {
@@ -109,10 +110,6 @@ function firstForbidden(m: Monomial, property: Holomorphy, c: Criterion, norm: Z
   return null;
 }
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
-  return 0;
-}
 
 function offendingRecord(o: Offending): MismatchRecord {
   return { q: rationalToString(o.q), zeta: o.halves.map((h) => rationalToString(rat(h, 2))), left: rationalToString(o.c), right: '0' };

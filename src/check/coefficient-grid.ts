@@ -5,7 +5,7 @@
  * the compared region. Small on purpose: a reader compares a handful of numbers by
  * eye; the page says how much was left out.
  */
-import { type Rational, rat, rcmp, rsub, rationalToString, vectorKey } from '../series/index.js';
+import { type Rational, rat, rcmp, rsub, rationalToString, vectorKey, lexCompare } from '../series/index.js';
 import type { CoefficientGrid } from '../verdict/index.js';
 import type { Mismatch, ZetaNorm } from './compare-series.js';
 import type { ComparedCell, ComparedRow } from './compared-positions.js';
@@ -16,10 +16,6 @@ export const GRID_COLUMNS = 13;
 /** Several variables: each column is a vector, wider to print. */
 export const GRID_COLUMNS_SEVERAL = 9;
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
-  return 0;
-}
 
 function rowWindow(rows: readonly ComparedRow[], mismatch: Mismatch | null): readonly ComparedRow[] {
   if (mismatch === null || rows.length <= GRID_ROWS) return rows.slice(0, GRID_ROWS);

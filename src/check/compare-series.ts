@@ -17,6 +17,7 @@ import {
   rationalToString,
   forEachTerm,
   vectorKey,
+  lexCompare,
 } from '../series/index.js';
 
 export interface Mismatch {
@@ -41,10 +42,6 @@ export type ZetaNorm = (halves: readonly number[]) => number;
 /** One variable: |ℓ|; several variables without an index: ℓᵀℓ. */
 export const defaultZetaNorm: ZetaNorm = (e) => (e.length === 1 ? Math.abs(e[0]!) : e.reduce((s, x) => s + x * x, 0));
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
-  return 0;
-}
 
 function nonZeroPositions(s: QZSeries, into: Set<string>): void {
   s.slices.forEach((sl, i) => {

@@ -18,6 +18,7 @@ import {
   vectorKey,
   rationalToString,
   ZERO,
+  lexCompare,
 } from '../series/index.js';
 import type { ZetaNorm } from './compare-series.js';
 
@@ -34,10 +35,6 @@ export interface ComparedRow {
   readonly cells: readonly ComparedCell[];
 }
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
-  return 0;
-}
 
 /** The distinct q-exponents ≤ X of the non-zero slices of a and b, ascending. */
 function rowExponents(a: QZSeries, b: QZSeries, X: Rational): Rational[] {

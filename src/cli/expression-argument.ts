@@ -4,8 +4,9 @@
  * command ends with status 1 (CLAIMS.md), a missing or extra argument with 2.
  */
 import { parseExpression, formatDiagnostic, type Diagnostic, type Expr } from '../lang/index.js';
+import { EvalError } from '../check/index.js';
 import type { ParsedArgs } from './parse-args.js';
-import { type CliIo, EXIT_FAILED, EXIT_USAGE } from './io.js';
+import { type CliIo, EXIT_FAILED, EXIT_OK, EXIT_USAGE } from './io.js';
 
 export function variablesOption(args: ParsedArgs): string[] {
   const raw = args.options.get('variables');
@@ -33,4 +34,18 @@ export function expressionArgument(command: string, args: ParsedArgs, io: CliIo)
     return { ok: false, status: EXIT_FAILED };
   }
   return { ok: true, text, expr: parsed.expr, variables };
+}
+
+/** Runs a command body; an evaluation error is printed against the expression, status 1. */
+export function withEvalDiagnostics(io: CliIo, text: string, body: () => void): number {
+  try {
+    body();
+    return EXIT_OK;
+  } catch (e) {
+    if (e instanceof EvalError) {
+      printDiagnostics(io, [e.diagnostic], text);
+      return EXIT_FAILED;
+    }
+    throw e;
+  }
 }

@@ -3,7 +3,7 @@
  * by q-exponent, then by the ζ-norm (|ℓ| for one variable, ℓᵀM⁻¹ℓ for several), then
  * lexicographically.
  */
-import { type QZSeries, type Rational, rational, sliceExponent, forEachTerm } from '../series/index.js';
+import { type QZSeries, type Rational, rational, sliceExponent, forEachTerm, lexCompare } from '../series/index.js';
 import { type ZetaNorm, defaultZetaNorm } from '../check/index.js';
 
 export interface ExpansionTerm {
@@ -13,10 +13,6 @@ export interface ExpansionTerm {
   readonly c: Rational;
 }
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
-  return 0;
-}
 
 /** The terms of slice i in the order of CLAIMS.md: by the norm, then lexicographically. */
 export function sliceTerms(s: QZSeries, i: number, norm: ZetaNorm = defaultZetaNorm): ExpansionTerm[] {

@@ -3,7 +3,7 @@
  * the grid from the lowest exponent to the q-order, zero slices included, every
  * digit shown. Within a slice terms run from the lowest ζ-exponent up.
  */
-import { type Rational, rationalToString, rcmp, rat, rneg, sliceExponent } from '../series/index.js';
+import { type Rational, rationalToString, rcmp, rat, rneg, sliceExponent, lexCompare } from '../series/index.js';
 import { formatIndex, multiplierText } from '../types/index.js';
 import type { Expansion } from '../check/expand.js';
 import { sliceTerms } from './expansion-terms.js';
@@ -18,10 +18,6 @@ function coefficientText(c: Rational, first: boolean, hasMonomial: boolean): str
   return negative ? ` - ${body}` : ` + ${body}`;
 }
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
-  return 0;
-}
 
 /** ζ^ℓ as text; several variables are written ζ1, ζ2, … in the order declared. */
 function zetaMonomial(halves: readonly number[]): string {

@@ -308,7 +308,8 @@ export function sliceDivideExact(a: Slice, b: Slice): Slice | null {
   return trimSlice(a.lo - b.lo, q);
 }
 
-function lexCompare(x: readonly number[], y: readonly number[]): number {
+/** Lexicographic order of exponent vectors (the tie-break of CLAIMS.md's term order). */
+export function lexCompare(x: readonly number[], y: readonly number[]): number {
   for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return x[i]! - y[i]!;
   return 0;
 }

@@ -1,22 +1,15 @@
 /** `sturmcheck type EXPR [--variables z1,z2] [--verbose]` (CLAIMS.md): 0 done, 1 expression error, 2 usage. */
-import { newEvalContext, describeType, EvalError } from '../../check/index.js';
+import { newEvalContext, describeType } from '../../check/index.js';
 import { typeDescriptionText } from '../../report/index.js';
 import type { ParsedArgs } from '../parse-args.js';
-import { type CliIo, EXIT_FAILED, EXIT_OK } from '../io.js';
-import { expressionArgument, printDiagnostics } from '../expression-argument.js';
+import type { CliIo } from '../io.js';
+import { expressionArgument, withEvalDiagnostics } from '../expression-argument.js';
 
 export function runType(args: ParsedArgs, io: CliIo): number {
   const arg = expressionArgument('type', args, io);
   if (!arg.ok) return arg.status;
-  try {
+  return withEvalDiagnostics(io, arg.text, () => {
     const description = describeType(arg.expr, newEvalContext(arg.text, arg.variables));
     io.stdout(typeDescriptionText(arg.text, description, args.options.get('verbose') === true));
-    return EXIT_OK;
-  } catch (e) {
-    if (e instanceof EvalError) {
-      printDiagnostics(io, [e.diagnostic], arg.text);
-      return EXIT_FAILED;
-    }
-    throw e;
-  }
+  });
 }
