@@ -6,6 +6,8 @@ import { type SeriesSource, type Rational, rat, source, cached } from '../series
 import { thetaSeries, THETA_START } from './theta.js';
 import { etaPowerSeries } from './eta.js';
 import { eisensteinSeries } from './eisenstein.js';
+import { etaPowerView } from './eta-residues.js';
+import { eisensteinView } from './eisenstein-residues.js';
 import { jacobiEisensteinSeries } from './jacobi-eisenstein.js';
 
 /** ϑ(τ, a z); its valuation 1/8 is exact for a ≠ 0 (and ϑ(τ, 0) = 0). */
@@ -15,11 +17,11 @@ export function thetaSource(a: number): SeriesSource {
 
 /** η^e, valuation e/24 exactly. */
 export function etaPowerSource(e: number): SeriesSource {
-  return cached(source(rat(e, 24), (X: Rational) => etaPowerSeries(e, X)));
+  return cached({ ...source(rat(e, 24), (X: Rational) => etaPowerSeries(e, X)), modular: etaPowerView(e) });
 }
 
 export function eisensteinSource(k: number): SeriesSource {
-  return cached(source(rat(0), (X: Rational) => eisensteinSeries(k, X)));
+  return cached({ ...source(rat(0), (X: Rational) => eisensteinSeries(k, X)), modular: eisensteinView(k) });
 }
 
 export function jacobiEisensteinSource(k: number): SeriesSource {

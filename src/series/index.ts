@@ -20,3 +20,5 @@ export * from './series-source.js';
 export * from './rational-rows.js';
 export * from './power-text.js';
 export { polyMultiply, choosePolyAlgorithm } from './poly-multiply.js';
+export * from './residue/index.js';
+export * from './modular-expansion.js';

@@ -9,19 +9,41 @@
  * Asking for more recomputes from the sources; nothing is ever padded with zeros.
  */
 import { type Rational, radd, rsub, rmul, rmin, rat, rcmp } from './rational.js';
+import type { ResidueSeries } from './residue/residue-series.js';
 import { type QZSeries, truncateSeries, zeroSeries } from './qz-series.js';
 import { multiplySeries } from './multiply.js';
 import { powerSeries } from './power.js';
 import { linearCombination } from './add.js';
 import { divideExact } from './divide-exact.js';
 import { substituteLinear } from './substitute.js';
+import { type ModularView, exactView, cachedView, ZERO_MAJORANT } from './residue/modular-view.js';
+import { majorantProduct, majorantPower, majorantSum } from './residue/majorant.js';
+import { zeroResidues } from './residue/residue-series.js';
+import { multiplyResidues } from './residue/residue-multiply.js';
+import { powerResidues } from './residue/residue-power.js';
+import { combineResidues } from './residue/residue-combine.js';
 
 export interface SeriesSource {
   /** A lower bound of the valuation; exact where the source says so. */
   readonly valuation: Rational;
   /** The series to q-order X (exact to at least X; callers truncate). */
   expand(X: Rational): QZSeries;
+  /** Its own modular route, if it has one (else `modularOf` goes through `expand`). */
+  readonly modular?: ModularView;
 }
+
+/** The source's modular view: its own, or the exact engine's. */
+export function modularOf(s: SeriesSource): ModularView {
+  if (s.modular !== undefined) return s.modular;
+  let v = exactViews.get(s);
+  if (v === undefined) {
+    v = exactView(s);
+    exactViews.set(s, v);
+  }
+  return v;
+}
+
+const exactViews = new WeakMap<SeriesSource, ModularView>();
 
 /** Wraps a builder `X ↦ series to X`. */
 export function source(valuation: Rational, build: (X: Rational) => QZSeries): SeriesSource {
@@ -33,6 +55,7 @@ export function cached(s: SeriesSource): SeriesSource {
   let best: QZSeries | null = null;
   return {
     valuation: s.valuation,
+    ...(s.modular ? { modular: cachedView(s.modular) } : {}),
     expand(X: Rational): QZSeries {
       if (best === null || rcmp(best.exactTo, X) < 0) best = s.expand(X);
       return rcmp(best.exactTo, X) === 0 ? best : truncateSeries(best, X);
@@ -54,6 +77,21 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
       }
       return truncateSeries(acc!, X);
     },
+    modular: {
+      majorant(X) {
+        if (rcmp(X, v) < 0) return ZERO_MAJORANT;
+        return majorantProduct(factors.map((f) => modularOf(f).majorant(radd(X, rsub(f.valuation, v)))));
+      },
+      residues(X, primes) {
+        if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
+        let acc: ResidueSeries | null = null;
+        for (const f of factors) {
+          const part = modularOf(f).residues(radd(X, rsub(f.valuation, v)), primes);
+          acc = acc === null ? part : multiplyResidues(acc, part, X);
+        }
+        return acc!;
+      },
+    },
   };
 }
 
@@ -65,6 +103,30 @@ export function powerSource(base: SeriesSource, k: number): SeriesSource {
       if (k > 0 && rcmp(X, v) < 0) return zeroSeries(X, v);
       const need = rsub(X, rmul(base.valuation, rat(k - 1)));
       return truncateSeries(powerSeries(base.expand(need), k), X);
+    },
+    ...modularPower(base, k, v),
+  };
+}
+
+/**
+ * f^k for k ≥ 1 by the rules of majorants; for k ≤ 0 only where the base knows its
+ * own powers (η), since an inverse has no majorant by the rules (MATH.md §8).
+ */
+function modularPower(base: SeriesSource, k: number, v: Rational): { modular?: ModularView } {
+  const own = base.modular?.power?.(k);
+  if (own !== undefined) return { modular: own };
+  if (k < 1) return {};
+  const need = (X: Rational): Rational => rsub(X, rmul(base.valuation, rat(k - 1)));
+  return {
+    modular: {
+      majorant(X) {
+        if (rcmp(X, v) < 0) return ZERO_MAJORANT;
+        return majorantPower(modularOf(base).majorant(need(X)), k);
+      },
+      residues(X, primes) {
+        if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
+        return powerResidues(modularOf(base).residues(need(X), primes), k, X);
+      },
     },
   };
 }
@@ -82,7 +144,20 @@ export function sumSource(terms: readonly WeightedSource[]): SeriesSource {
     expand(X: Rational): QZSeries {
       return linearCombination(terms.map((t) => ({ series: t.source.expand(X), coefficient: t.coefficient })));
     },
+    modular: {
+      majorant: (X) => majorantSum(terms.map((t) => ({ majorant: modularOf(t.source).majorant(X), coefficient: t.coefficient }))),
+      residues: (X, primes) =>
+        combineResidues(
+          terms.map((t) => ({ series: modularOf(t.source).residues(X, primes), coefficient: t.coefficient })),
+          primes,
+        ),
+    },
   };
+}
+
+/** c·f. */
+export function scaledSource(s: SeriesSource, c: Rational): SeriesSource {
+  return sumSource([{ source: s, coefficient: c }]);
 }
 
 /** Applies a map that preserves q-orders (D_q, D_ζ, ζ ↦ ζ^a, scaling). */

@@ -8,7 +8,7 @@
  * over Z, so the result is exact.
  */
 import { JSBI, type Int, ZERO, int, isZero } from '../integer.js';
-import { mulmod, invmod } from './mulmod.js';
+import { garner } from './garner.js';
 import { nttPrimes, NTT_MAX_LOG, type NttPrime } from './ntt-primes.js';
 import { nttMultiply } from './ntt.js';
 
@@ -71,34 +71,6 @@ export function primesFor(heightBits: number): NttPrime[] | null {
     bits += Math.floor(Math.log2(pr.p));
   }
   return bits >= heightBits + 2 ? chosen : null;
-}
-
-/** Garner's algorithm: the integer in (−M/2, M/2] with the given residues. */
-function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], len: number): Int[] {
-  const k = primes.length;
-  const inv: number[][] = primes.map((pi, i) => primes.map((pj, j) => (j > i ? invmod(pi.p % pj.p, pj.p) : 0)));
-  let M = int(1);
-  for (const pr of primes) M = JSBI.multiply(M, int(pr.p));
-  const halfM = JSBI.divide(M, int(2));
-  const out: Int[] = new Array<Int>(len);
-  const v = new Array<number>(k);
-  for (let n = 0; n < len; n++) {
-    for (let j = 0; j < k; j++) {
-      const pj = primes[j]!.p;
-      const pinv = 1 / pj;
-      let x = rs[j]![n]!;
-      for (let i = 0; i < j; i++) {
-        x = x - v[i]!;
-        if (x < 0) x += pj;
-        x = mulmod(x, inv[i]![j]!, pj, pinv);
-      }
-      v[j] = x;
-    }
-    let acc = int(v[k - 1]!);
-    for (let j = k - 2; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, int(primes[j]!.p)), int(v[j]!));
-    out[n] = JSBI.greaterThan(acc, halfM) ? JSBI.subtract(acc, M) : acc;
-  }
-  return out;
 }
 
 /** a·b exactly, or null when the product is too long or too high for the prime table. */

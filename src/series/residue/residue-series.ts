@@ -1,0 +1,120 @@
+/**
+ * The modular back-end's series (ARCHITECTURE.md, the series engine): one variable,
+ * the coefficients modulo each of a few word-size primes on a rectangular grid.
+ * Row i is q^(start + i/qDen); column j is ζ^((zLo + zStep·j)/2). Each prime's
+ * residues, in [0, p), fill one Int32Array row by row. Like `QZSeries`, a residue
+ * series holds exactly the rows with exponent ≤ exactTo and knows nothing beyond.
+ * A rational coefficient a/b is stored as a·b⁻¹ mod p; the primes divide no
+ * denominator (`Majorant.avoid`).
+ */
+import { JSBI, type Int, gcdNumber, int, isZero } from '../integer.js';
+import { type Rational, rcmp } from '../rational.js';
+import { type QZSeries, sliceCountTo } from '../qz-series.js';
+import { dense } from '../slice.js';
+import { invmod, mulmod } from '../modular/mulmod.js';
+import type { NttPrime } from '../modular/ntt-primes.js';
+
+export interface ResidueSeries {
+  readonly primes: readonly NttPrime[];
+  readonly start: Rational;
+  readonly qDen: number;
+  readonly rows: number;
+  readonly exactTo: Rational;
+  /** ζ-exponent of column 0, in halves. */
+  readonly zLo: number;
+  /** ζ-exponent step between columns, in halves (1 when there is one column). */
+  readonly zStep: number;
+  readonly width: number;
+  /** One array per prime, rows × width, row-major. */
+  readonly data: readonly Int32Array[];
+}
+
+export function residueOf(x: Int, p: number): number {
+  const n = JSBI.toNumber(x);
+  let r = Number.isSafeInteger(n) ? n % p : JSBI.toNumber(JSBI.remainder(x, int(p)));
+  if (r < 0) r += p;
+  return r;
+}
+
+export function rationalResidue(r: Rational, p: number): number {
+  const d = residueOf(r.den, p);
+  if (d === 0) throw new RangeError(`internal: the prime ${p} divides a denominator`);
+  return mulmod(residueOf(r.num, p), invmod(d, p), p, 1 / p);
+}
+
+export function zeroResidues(primes: readonly NttPrime[], start: Rational, qDen: number, exactTo: Rational): ResidueSeries {
+  const rows = sliceCountTo(start, qDen, exactTo);
+  return { primes, start, qDen, rows, exactTo, zLo: 0, zStep: 1, width: 1, data: primes.map(() => new Int32Array(rows)) };
+}
+
+/** The residues of an exact one-variable series. */
+export function residuesOfSeries(s: QZSeries, primes: readonly NttPrime[]): ResidueSeries {
+  if (s.nvars !== 1) throw new RangeError('internal: the modular back-end takes one variable');
+  const slices = s.slices.map(dense);
+  let zLo = Infinity;
+  let zHi = -Infinity;
+  for (const sl of slices) {
+    if (sl.c.length === 0) continue;
+    zLo = Math.min(zLo, sl.lo);
+    zHi = Math.max(zHi, sl.lo + sl.c.length - 1);
+  }
+  if (zLo === Infinity) return zeroResidues(primes, s.start, s.qDen, s.exactTo);
+  let zStep = 0;
+  for (const sl of slices) sl.c.forEach((c, i) => {
+    if (!isZero(c)) zStep = gcdNumber(zStep, sl.lo + i - zLo);
+  });
+  if (zStep === 0) zStep = 1;
+  const width = (zHi - zLo) / zStep + 1;
+  const rows = slices.length;
+  const data = primes.map(({ p }) => {
+    const a = new Int32Array(rows * width);
+    const dinv = invmod(residueOf(s.den, p), p);
+    const pinv = 1 / p;
+    slices.forEach((sl, i) => {
+      sl.c.forEach((c, j) => {
+        const off = sl.lo + j - zLo;
+        if (off % zStep !== 0) return;
+        a[i * width + off / zStep] = mulmod(residueOf(c, p), dinv, p, pinv);
+      });
+    });
+    return a;
+  });
+  return { primes, start: s.start, qDen: s.qDen, rows, exactTo: s.exactTo, zLo, zStep, width, data };
+}
+
+/** The rows with exponent ≤ X (X ≤ exactTo). */
+export function truncateResidues(r: ResidueSeries, X: Rational): ResidueSeries {
+  if (rcmp(X, r.exactTo) > 0) throw new RangeError('internal: residues asked past their q-order');
+  const rows = sliceCountTo(r.start, r.qDen, X);
+  if (rows === r.rows) return { ...r, exactTo: X };
+  return { ...r, rows, exactTo: X, data: r.data.map((a) => a.subarray(0, rows * r.width)) };
+}
+
+/** The same residues on a finer grid: q-denominator a multiple of qDen, ζ-step dividing zStep. */
+export function regridResidues(r: ResidueSeries, qDen: number, zStep: number, zLo: number, width: number): ResidueSeries {
+  if (qDen === r.qDen && zStep === r.zStep && zLo === r.zLo && width === r.width) return r;
+  const rowStep = qDen / r.qDen;
+  const rows = sliceCountTo(r.start, qDen, r.exactTo);
+  const colStep = r.width === 1 ? 0 : r.zStep / zStep;
+  const colOff = (r.zLo - zLo) / zStep;
+  if (!Number.isInteger(rowStep) || !Number.isInteger(colStep) || !Number.isInteger(colOff)) {
+    throw new RangeError('internal: regridResidues to an incompatible grid');
+  }
+  const data = r.data.map((a) => {
+    const out = new Int32Array(rows * width);
+    for (let i = 0; i < r.rows; i++) {
+      for (let j = 0; j < r.width; j++) out[i * rowStep * width + colOff + j * colStep] = a[i * r.width + j]!;
+    }
+    return out;
+  });
+  return { ...r, qDen, rows, zStep, zLo, width, data };
+}
+
+/** Number of non-zero grid entries (for the first prime; a cost estimate only). */
+export function nonZeroCount(r: ResidueSeries): number {
+  const a = r.data[0];
+  if (a === undefined) return 0;
+  let n = 0;
+  for (let i = 0; i < a.length; i++) if (a[i] !== 0) n++;
+  return n;
+}

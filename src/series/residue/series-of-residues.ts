@@ -1,0 +1,49 @@
+/**
+ * Back from residues to exact coefficients (MATH.md §8): given D with D·c integral and
+ * primes whose product M exceeds 2·D·C (C the majorant), the residues of D·c determine
+ * D·c by CRT in (−M/2, M/2]; dividing by D gives c. The caller guarantees M > 2H;
+ * nothing here can check it.
+ */
+import { type Int, ZERO, isZero } from '../integer.js';
+import { type QZSeries, makeSeries } from '../qz-series.js';
+import { type Slice, trimSlice, EMPTY_SLICE } from '../slice.js';
+import { garner } from '../modular/garner.js';
+import { mulmod } from '../modular/mulmod.js';
+import { type ResidueSeries, residueOf } from './residue-series.js';
+
+/** The residues of D·c, one array per prime. */
+function scaledResidues(r: ResidueSeries, den: Int): Int32Array[] {
+  return r.data.map((a, i) => {
+    const { p } = r.primes[i]!;
+    const d = residueOf(den, p);
+    const pinv = 1 / p;
+    const out = new Int32Array(a.length);
+    for (let j = 0; j < a.length; j++) out[j] = mulmod(a[j]!, d, p, pinv);
+    return out;
+  });
+}
+
+/** The integers D·c of the whole grid, row-major. */
+export function numeratorsOfResidues(r: ResidueSeries, den: Int): Int[] {
+  return garner(scaledResidues(r, den), r.primes, r.rows * r.width);
+}
+
+export function seriesOfResidues(r: ResidueSeries, den: Int): QZSeries {
+  const nums = numeratorsOfResidues(r, den);
+  const slices: Slice[] = [];
+  for (let i = 0; i < r.rows; i++) {
+    const row = nums.slice(i * r.width, (i + 1) * r.width);
+    if (row.every(isZero)) {
+      slices.push(EMPTY_SLICE);
+      continue;
+    }
+    if (r.zStep === 1) {
+      slices.push(trimSlice(r.zLo, row));
+      continue;
+    }
+    const c = new Array<Int>((r.width - 1) * r.zStep + 1).fill(ZERO);
+    row.forEach((x, j) => (c[j * r.zStep] = x));
+    slices.push(trimSlice(r.zLo, c));
+  }
+  return makeSeries(r.start, r.qDen, den, slices, r.exactTo);
+}
