@@ -112,6 +112,18 @@ function comparison(v: unknown, path: string): void {
   pattern(d['value'], `${path}.digest.value`, HEX64, '64 lower-case hex digits');
 }
 
+function routeOf(v: unknown): void {
+  const head = object(v, 'route', ['route'], ['primes', 'heightBits']);
+  oneOf(head['route'], 'route.route', ['exact', 'modular']);
+  if (head['route'] === 'exact') {
+    object(v, 'route', ['route']);
+    return;
+  }
+  const r = object(v, 'route', ['route', 'primes', 'heightBits']);
+  array(r['primes'], 'route.primes').forEach((p, i) => integer(p, `route.primes[${i}]`, 2));
+  integer(r['heightBits'], 'route.heightBits', 0);
+}
+
 function certificate(v: unknown): Certificate {
   const o = object(
     v,
@@ -137,8 +149,7 @@ function certificate(v: unknown): Certificate {
   if (o['type'] !== undefined) typeRecord(o['type'], 'type');
   if (o['normalForm'] !== undefined) normalForm(o['normalForm'], 'normalForm');
   if (o['bound'] !== undefined) bound(o['bound'], 'bound');
-  const route = object(o['route'], 'route', ['route']);
-  oneOf(route['route'], 'route.route', ['exact']);
+  routeOf(o['route']);
   if (o['comparison'] !== undefined) comparison(o['comparison'], 'comparison');
   if ((o['bound'] === undefined) !== (o['comparison'] === undefined)) fail('certificate', '"bound" and "comparison" come together');
   if (o['reason'] !== undefined) string(o['reason'], 'reason');

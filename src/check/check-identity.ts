@@ -5,16 +5,17 @@
  * assumption (an error, never a proof). Quasi-modular claims are compared to the
  * nominal bound plus `depth` q-steps and are at best unproved.
  */
-import { type Rational, rat, radd, rmin, rationalToString, type QZSeries, powerText } from '../series/index.js';
+import { type Rational, rat, radd, rmin, rationalToString, powerText, seriesOfResidues } from '../series/index.js';
 import type { Expr } from '../lang/ast.js';
 import { type ModularType, typesEqual, typeDifferences, type FormClass } from '../types/index.js';
-import type { ComparisonEvidence, FactorRecord, MismatchRecord, TypeRecord } from '../verdict/index.js';
+import type { ComparisonEvidence, FactorRecord, MismatchRecord, ModularRouteRecord, TypeRecord } from '../verdict/index.js';
 import type { Monomial, AtomPower } from './atom.js';
 import { evaluate, type EvalContext } from './evaluate.js';
 import { atomMonomial, monomialText, sortedFactors, multiplyMonomials, powerMonomial, ONE_MONOMIAL, isZeroMonomial } from './monomial.js';
 import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
 import { numeratorSource } from './monomial-source.js';
-import { compareTo, type Mismatch } from './compare-series.js';
+import { compareTo, type Comparison, type Mismatch } from './compare-series.js';
+import { modularSides, compareResiduesTo } from './compare-residues.js';
 import { isIdenticallyZero } from './side-zero.js';
 import { boundFor } from './bound-of-type.js';
 import { estimateTermsForType } from './estimate.js';
@@ -87,7 +88,20 @@ function worstClass(a: FormClass, b: FormClass): FormClass {
   return a === 'meromorphic' || b === 'meromorphic' ? 'meromorphic' : 'modular';
 }
 
-function expandBoth(nf: NormalForm, t: ModularType, X: Rational, opts: CheckOptions): [QZSeries, QZSeries] {
+/**
+ * Below this many coefficients in the bound, `auto` stays exact: on the bundled claims
+ * the exact engine is as fast there, and its route needs no height bound.
+ */
+export const MODULAR_MIN_TERMS = 4000;
+
+/** Both sides of F expanded to one q-order, compared at any order up to it. */
+interface ExpandedSides {
+  compare(X: Rational): Comparison;
+  evidence(X: Rational, mismatch: Mismatch | null): ComparisonEvidence;
+  readonly route?: ModularRouteRecord;
+}
+
+function expandBoth(nf: NormalForm, t: ModularType, X: Rational, nvars: number, opts: CheckOptions): ExpandedSides {
   const ls = numeratorSource(nf.left);
   const rs = numeratorSource(nf.right);
   const v = rmin(ls.valuation, rs.valuation);
@@ -95,7 +109,20 @@ function expandBoth(nf: NormalForm, t: ModularType, X: Rational, opts: CheckOpti
   if (estimate > opts.maxTerms) {
     throw evalError(evalCodes.tooManyTerms, { estimate: Math.ceil(estimate).toExponential(2), limit: opts.maxTerms }, null);
   }
-  return [ls.expand(X), rs.expand(X)];
+  const norm = zetaNormFor(t);
+  const mode = opts.arithmetic ?? 'auto';
+  const modular = nvars === 1 && (mode === 'modular' || (mode === 'auto' && estimate >= MODULAR_MIN_TERMS));
+  const sides = modular ? modularSides(ls, rs, X) : null;
+  if (sides !== null) {
+    return {
+      compare: (Y) => compareResiduesTo(sides, Y, norm),
+      evidence: (Y, m) => comparisonEvidence(seriesOfResidues(sides.left, sides.leftMajorant.den), seriesOfResidues(sides.right, sides.rightMajorant.den), Y, norm, m),
+      route: sides.route,
+    };
+  }
+  const a = ls.expand(X);
+  const b = rs.expand(X);
+  return { compare: (Y) => compareTo(a, b, Y, norm), evidence: (Y, m) => comparisonEvidence(a, b, Y, norm, m) };
 }
 
 export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: CheckOptions): Outcome {
@@ -133,9 +160,9 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
   const { qOrder: X, derivation, theorem } = boundFor(tF);
   if (quasi) {
     const to = radd(X, rat(opts.depth));
-    const [a, b] = expandBoth(nf, tF, to, opts);
-    const c = compareTo(a, b, to, zetaNormFor(tF));
-    const evidence = withEvidence(opts, () => comparisonEvidence(a, b, to, zetaNormFor(tF), c.mismatch));
+    const sides = expandBoth(nf, tF, to, nvars, opts);
+    const c = sides.compare(to);
+    const evidence = withEvidence(opts, () => sides.evidence(to, c.mismatch));
     const reasons = [...new Set([...quasiReasons(l), ...quasiReasons(r)])].join('; ');
     if (c.mismatch !== null) {
       return { verdict: 'refuted', type: claimType, compared, normalForm: normal, ...evidence, mismatch: mismatchRecord(c.mismatch), reason: `the expansions differ (${reasons}; compared to the nominal bound plus ${opts.depth} q-steps)` };
@@ -150,14 +177,13 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
     };
   }
   const marginTo = radd(X, rat(opts.margin));
-  const [a, b] = expandBoth(nf, tF, marginTo, opts);
-  const norm = zetaNormFor(tF);
-  const c = compareTo(a, b, X, norm);
-  const evidence = withEvidence(opts, () => comparisonEvidence(a, b, X, norm, c.mismatch));
+  const sides = expandBoth(nf, tF, marginTo, nvars, opts);
+  const c = sides.compare(X);
+  const evidence = withEvidence(opts, () => sides.evidence(X, c.mismatch));
   if (c.mismatch !== null) {
     return { verdict: 'refuted', type: claimType, compared, normalForm: normal, ...evidence, mismatch: mismatchRecord(c.mismatch), reason: 'a coefficient inside the bound differs' };
   }
-  const margin = compareTo(a, b, marginTo, norm);
+  const margin = sides.compare(marginTo);
   if (margin.mismatch !== null) return marginFailure(ctx, margin.mismatch, marginTo);
   return {
     verdict: 'proved',
@@ -172,6 +198,7 @@ export function checkIdentity(left: Expr, right: Expr, ctx: EvalContext, opts: C
       derivation,
       marginTo: rationalToString(marginTo),
       ...(opts.evidence === true ? { parameters: boundParameters(tF) } : {}),
+      ...(sides.route === undefined ? {} : { route: sides.route }),
     },
   };
 }

@@ -15,6 +15,13 @@ export interface CheckOptions {
    */
   readonly evidence?: boolean;
   /**
+   * How coefficients are computed: exact rationals, residues modulo word-size primes
+   * under a proven height bound (MATH.md §8; one variable), or `auto` (the default),
+   * which takes the modular route for one-variable claims whose bound needs at least
+   * MODULAR_MIN_TERMS coefficients.
+   */
+  readonly arithmetic?: 'auto' | 'exact' | 'modular';
+  /**
    * Test-only: replaces the inferred type of F before the bound is taken, to show
    * that a wrong type rule is caught by the margin check. Never set by the CLI.
    */

@@ -6,7 +6,7 @@
  * assumptions, types, normal form, bound, route, coefficient count, digest, reason.
  * The first step that disagrees is the answer; nothing the file states is trusted.
  */
-import { parseClaimFile } from '../lang/index.js';
+import { parseClaimFile, type ParsedClaimFile } from '../lang/index.js';
 import { type Certificate } from '../verdict/index.js';
 import { checkClaimFile } from './check-file.js';
 import type { CheckOptions } from './check-options.js';
@@ -78,13 +78,10 @@ export function recheck(cert: Certificate, opts: CheckOptions, toolVersion: stri
   if (claims.length !== 1 || parsed.ast.statements[parsed.ast.statements.length - 1] !== claims[0]) {
     return disagree('parse', `claim.text must hold exactly one claim, after the closure; found ${claims.length}`);
   }
-  const verdicts = checkClaimFile(parsed.ast, parsed.diagnostics, { ...opts, evidence: true });
-  const fileError = verdicts.find((v) => v.claimText === undefined);
-  if (fileError !== undefined) return disagree('verdict', `the closure has an error: ${fileError.reason ?? 'unknown'}`);
-  const fresh = verdicts[0]!;
-  if (fresh.verdict !== 'proved') return disagree('verdict', `re-derived ${fresh.verdict}, not proved: ${fresh.reason ?? ''}`.trimEnd());
-  const again = certificateOf(fresh, toolVersion);
-  if (again === null) return disagree('verdict', 'the fresh check recorded no evidence to certify');
+  // the fresh check takes the certificate's own route, so every recorded step can match
+  const fresh = freshCertificate(parsed, cert.route.route, opts, toolVersion);
+  if (typeof fresh === 'string') return disagree('verdict', fresh);
+  const again = fresh;
   const steps: readonly [RecheckStep, string, unknown, unknown][] = [
     ['relation', 'claim.relation', cert.claim.relation, again.claim.relation],
     ['assumptions', 'assumptions', cert.assumptions, again.assumptions],
@@ -100,5 +97,22 @@ export function recheck(cert: Certificate, opts: CheckOptions, toolVersion: stri
     const d = firstDifference(path, recorded, derived);
     if (d !== null) return disagree(step, d);
   }
+  if (cert.route.route === 'modular') {
+    // a modular proof is also re-derived through the exact engine: same coefficients
+    const exact = freshCertificate(parsed, 'exact', opts, toolVersion);
+    if (typeof exact === 'string') return disagree('verdict', `the exact re-derivation: ${exact}`);
+    const d = firstDifference('comparison.digest', cert.comparison?.digest, exact.comparison?.digest);
+    if (d !== null) return disagree('digest', `the exact re-derivation differs: ${d}`);
+  }
   return { status: 'confirmed', certificate: cert };
+}
+
+/** The certificate a fresh check by the given arithmetic writes, or why there is none. */
+function freshCertificate(parsed: ParsedClaimFile, arithmetic: 'exact' | 'modular', opts: CheckOptions, toolVersion: string): Certificate | string {
+  const verdicts = checkClaimFile(parsed.ast, parsed.diagnostics, { ...opts, evidence: true, arithmetic });
+  const fileError = verdicts.find((v) => v.claimText === undefined);
+  if (fileError !== undefined) return `the closure has an error: ${fileError.reason ?? 'unknown'}`;
+  const fresh = verdicts[0]!;
+  if (fresh.verdict !== 'proved') return `re-derived ${fresh.verdict}, not proved: ${fresh.reason ?? ''}`.trimEnd();
+  return certificateOf(fresh, toolVersion) ?? 'the fresh check recorded no evidence to certify';
 }

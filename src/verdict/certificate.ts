@@ -60,12 +60,13 @@ export interface CertificateBound extends BoundParameters {
 }
 
 /**
- * How the coefficients were computed. Only exact rational arithmetic exists now; a
- * modular route will add its primes and the height bound beside `route`.
+ * How the coefficients were computed: exact rational arithmetic, or residues modulo
+ * the listed primes, whose product exceeds 2·2^heightBits, every numerator of both
+ * sides over their common denominator being at most 2^heightBits (MATH.md §8).
  */
-export interface CertificateRoute {
-  readonly route: 'exact';
-}
+export type CertificateRoute =
+  | { readonly route: 'exact' }
+  | { readonly route: 'modular'; readonly primes: readonly number[]; readonly heightBits: number };
 
 export interface CertificateComparison {
   /** Positions compared: q-exponent ≤ bound.qOrder, either side non-zero. */

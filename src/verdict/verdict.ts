@@ -30,6 +30,14 @@ export interface BoundRecord {
   readonly marginTo?: string;
   /** The numbers the theorem was applied to; filled when evidence is recorded. */
   readonly parameters?: BoundParameters;
+  /** Present when the coefficients were compared modulo primes (MATH.md §8). */
+  readonly route?: ModularRouteRecord;
+}
+
+/** The primes of a modular comparison and the height bound 2^heightBits their product exceeds twice. */
+export interface ModularRouteRecord {
+  readonly primes: readonly number[];
+  readonly heightBits: number;
 }
 
 /** K, m (or M), and for Theorem B the rank of M and ρ (MATH.md §6). */
