@@ -21,7 +21,10 @@ import {
   rcmp,
   rational,
   lcm,
-  heightBits,
+  heightBitsOf,
+  majorantMaxLog2,
+  majorantBlockLength,
+  rmin,
   choosePrimes,
   modularOf,
   alignResidues,
@@ -47,10 +50,11 @@ export interface ModularSides {
 export function modularSides(ls: SeriesSource, rs: SeriesSource, X: Rational): ModularSides | null {
   const lv = modularOf(ls);
   const rv = modularOf(rs);
-  const ml = lv.majorant(X);
-  const mr = rv.majorant(X);
+  const h = majorantBlockLength(X, rmin(ls.valuation, rs.valuation));
+  const ml = lv.majorant(X, h);
+  const mr = rv.majorant(X, h);
   const den = lcm(ml.den, mr.den);
-  const bits = heightBits({ log2: Math.max(ml.log2, mr.log2), den, avoid: den });
+  const bits = heightBitsOf(Math.max(majorantMaxLog2(ml), majorantMaxLog2(mr)), den);
   const choice = choosePrimes(bits, lcm(lcm(ml.avoid, mr.avoid), den));
   if (choice === null) return null;
   return {

@@ -2,7 +2,8 @@
  * E_k on the modular route (MATH.md §8). Residues: σ_{k−1}(n) mod p by a divisor sieve,
  * times the constant c = −2k/B_k mod p (the primes avoid its denominator, 691 for
  * k = 12). Majorant: Σ_{n≤N} σ_{k−1}(n) = Σ_{d≤N} d^{k−1}⌊N/d⌋ ≤ N·Σ_{d≤N} d^{k−2} ≤ N^k,
- * so the cumulative sum of |coefficients| through q^N is at most 1 + |c|·N^k.
+ * so the cumulative sum of |coefficients| through q^N is at most 1 + |c|·N^k, which
+ * bounds every block up to q^N.
  */
 import {
   type Rational,
@@ -20,9 +21,9 @@ import {
   mulmod,
   rationalResidue,
   log2UpperRational,
-  log2AddUpper,
   up,
-  ZERO_MAJORANT,
+  zeroMajorant,
+  majorantFromCumulative,
 } from '../series/index.js';
 import { eisensteinConstant } from './eisenstein.js';
 
@@ -53,11 +54,15 @@ function eisensteinResidues(k: number, rows: number, primes: readonly NttPrime[]
 export function eisensteinView(k: number): ModularView {
   const c = eisensteinConstant(k);
   return cachedView({
-    majorant(X) {
-      if (rcmp(X, rat(0)) < 0) return ZERO_MAJORANT;
-      const N = toNumber(rfloor(X));
-      const tail = N === 0 ? -Infinity : up(log2UpperRational(c) + k * Math.log2(N));
-      return { log2: log2AddUpper(0, tail), den: c.den, avoid: c.den };
+    majorant(X, h) {
+      if (rcmp(X, rat(0)) < 0) return zeroMajorant(h);
+      const cumulative = (x: Rational): number => {
+        const N = toNumber(rfloor(x));
+        if (N === 0) return 0;
+        const tail = up(log2UpperRational(c) + k * Math.log2(N));
+        return up(tail + Math.log2(1 + 2 ** -tail));
+      };
+      return majorantFromCumulative(h, rat(0), X, cumulative, c.den);
     },
     residues(X, primes) {
       if (rcmp(X, rat(0)) < 0) return zeroResidues(primes, rat(0), 1, X);

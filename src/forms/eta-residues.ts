@@ -17,7 +17,6 @@ import {
   type ResidueSeries,
   type Majorant,
   type NttPrime,
-  ONE,
   rat,
   rsub,
   rcmp,
@@ -28,7 +27,13 @@ import {
   zeroResidues,
   cachedView,
   up,
-  ZERO_MAJORANT,
+  zeroMajorant,
+  blockOf,
+  majorantFromLog2,
+  majorantFromCumulative,
+  majorantPower,
+  majorantProduct,
+  radd,
 } from '../series/index.js';
 
 function pentagonalResidues(rows: number, primes: readonly NttPrime[]): ResidueSeries {
@@ -50,18 +55,6 @@ function pentagonalResidues(rows: number, primes: readonly NttPrime[]): ResidueS
   return { primes, start: rat(0), qDen: 1, rows, exactTo, zLo: 0, zStep: 1, width: 1, data };
 }
 
-function pentagonalCount(N: number): number {
-  let c = 1;
-  for (let k = 1; (k * (3 * k - 1)) / 2 <= N; k++) c += (k * (3 * k + 1)) / 2 <= N ? 2 : 1;
-  return c;
-}
-
-function jacobiCubeSum(N: number): number {
-  let K = 0;
-  while (((K + 1) * (K + 2)) / 2 <= N) K++;
-  return (K + 1) * (K + 1);
-}
-
 /** log₂ of a bound of Σ_{n ≤ N} coefficients of Π(1 − qⁿ)^(−a), a > 0. */
 function inverseLog2(a: number, N: number): number {
   if (N === 0) return 0;
@@ -80,21 +73,53 @@ function inverseLog2(a: number, N: number): number {
   return up(up(lnC) / Math.LN2);
 }
 
-function majorantLog2(e: number, N: number): number {
-  if (e === 0) return 0;
-  if (e < 0) return inverseLog2(-e, N);
-  const cube = Math.floor(e / 3);
-  return up(cube * Math.log2(jacobiCubeSum(N)) + (e % 3) * Math.log2(pentagonalCount(N)));
+/** η³ = Σ_{k≥0} (−1)^k (2k+1) q^{1/8 + k(k+1)/2} (Jacobi), or η = Σ_k (−1)^k q^{1/24 + k(3k−1)/2} (Euler), to X, as exact block sums. */
+function sparseEtaMajorant(cube: boolean, X: Rational, h: number): Majorant {
+  const v = rat(cube ? 3 : 1, 24);
+  const first = blockOf(v, h);
+  const last = blockOf(X, h);
+  const sums = new Array<number>(Math.max(0, last - first + 1)).fill(0);
+  const N = toNumber(rfloor(rsub(X, v)));
+  const add = (n: number, c: number): void => {
+    if (n > N) return;
+    sums[blockOf(radd(v, rat(n)), h) - first] += c;
+  };
+  if (cube) for (let k = 0; (k * (k + 1)) / 2 <= N; k++) add((k * (k + 1)) / 2, 2 * k + 1);
+  else {
+    add(0, 1);
+    for (let k = 1; (k * (3 * k - 1)) / 2 <= N; k++) {
+      add((k * (3 * k - 1)) / 2, 1);
+      add((k * (3 * k + 1)) / 2, 1);
+    }
+  }
+  // block sums are integers below 2^53: exact in doubles
+  return majorantFromLog2(h, first, sums.map((x) => (x === 0 ? -Infinity : up(Math.log2(x)))));
+}
+
+/**
+ * The majorant of η^e to X: for e > 0 the product rule applied to
+ * (η³)^⌊e/3⌋·η^(e mod 3), from the exact block sums of the two sparse series; for
+ * e < 0 Rankin's bound of the cumulative sums, block by block.
+ */
+function etaMajorant(e: number, X: Rational, h: number): Majorant {
+  const last = blockOf(X, h);
+  if (e < 0) {
+    const v = rat(e, 24);
+    return majorantFromCumulative(h, v, X, (x) => inverseLog2(-e, toNumber(rfloor(rsub(x, v)))));
+  }
+  const parts: Majorant[] = [];
+  if (e >= 3) parts.push(majorantPower(sparseEtaMajorant(true, X, h), Math.floor(e / 3), last));
+  if (e % 3 !== 0) parts.push(majorantPower(sparseEtaMajorant(false, X, h), e % 3, last));
+  return majorantProduct(parts, last);
 }
 
 /** η^e's modular view; valuation e/24. */
 export function etaPowerView(e: number): ModularView {
   const v = rat(e, 24);
-  const steps = (X: Rational): number => toNumber(rfloor(rsub(X, v)));
   return cachedView({
-    majorant(X): Majorant {
-      if (rcmp(X, v) < 0) return ZERO_MAJORANT;
-      return { log2: majorantLog2(e, steps(X)), den: ONE, avoid: ONE };
+    majorant(X, h): Majorant {
+      if (rcmp(X, v) < 0 || e === 0) return rcmp(X, v) < 0 ? zeroMajorant(h) : majorantFromLog2(h, 0, [0]);
+      return etaMajorant(e, X, h);
     },
     residues(X, primes) {
       if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);

@@ -7,7 +7,7 @@
 import type { Rational } from './rational.js';
 import type { QZSeries } from './qz-series.js';
 import { type SeriesSource, modularOf } from './series-source.js';
-import { heightBits } from './residue/majorant.js';
+import { heightBits, majorantBlockLength } from './residue/majorant.js';
 import { choosePrimes } from './residue/prime-choice.js';
 import { seriesOfResidues } from './residue/series-of-residues.js';
 import type { ResidueSeries } from './residue/residue-series.js';
@@ -28,7 +28,7 @@ export interface ModularResidues {
 /** The residues of s to X with enough primes for its own height; null if the table is too short. */
 export function modularResidues(s: SeriesSource, X: Rational): ModularResidues | null {
   const view = modularOf(s);
-  const majorant = view.majorant(X);
+  const majorant = view.majorant(X, majorantBlockLength(X, s.valuation));
   const bits = heightBits(majorant);
   const choice = choosePrimes(bits, majorant.avoid);
   if (choice === null) return null;

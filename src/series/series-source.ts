@@ -16,8 +16,8 @@ import { powerSeries } from './power.js';
 import { linearCombination } from './add.js';
 import { divideExact } from './divide-exact.js';
 import { substituteLinear } from './substitute.js';
-import { type ModularView, exactView, cachedView, ZERO_MAJORANT } from './residue/modular-view.js';
-import { majorantProduct, majorantPower, majorantSum } from './residue/majorant.js';
+import { type ModularView, exactView, cachedView } from './residue/modular-view.js';
+import { majorantProduct, majorantPower, majorantSum, zeroMajorant, blockOf } from './residue/majorant.js';
 import { zeroResidues } from './residue/residue-series.js';
 import { multiplyResidues } from './residue/residue-multiply.js';
 import { powerResidues } from './residue/residue-power.js';
@@ -78,9 +78,12 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
       return truncateSeries(acc!, X);
     },
     modular: {
-      majorant(X) {
-        if (rcmp(X, v) < 0) return ZERO_MAJORANT;
-        return majorantProduct(factors.map((f) => modularOf(f).majorant(radd(X, rsub(f.valuation, v)))));
+      majorant(X, h) {
+        if (rcmp(X, v) < 0) return zeroMajorant(h);
+        return majorantProduct(
+          factors.map((f) => modularOf(f).majorant(radd(X, rsub(f.valuation, v)), h)),
+          blockOf(X, h),
+        );
       },
       residues(X, primes) {
         if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
@@ -119,9 +122,9 @@ function modularPower(base: SeriesSource, k: number, v: Rational): { modular?: M
   const need = (X: Rational): Rational => rsub(X, rmul(base.valuation, rat(k - 1)));
   return {
     modular: {
-      majorant(X) {
-        if (rcmp(X, v) < 0) return ZERO_MAJORANT;
-        return majorantPower(modularOf(base).majorant(need(X)), k);
+      majorant(X, h) {
+        if (rcmp(X, v) < 0) return zeroMajorant(h);
+        return majorantPower(modularOf(base).majorant(need(X), h), k, blockOf(X, h));
       },
       residues(X, primes) {
         if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
@@ -145,7 +148,7 @@ export function sumSource(terms: readonly WeightedSource[]): SeriesSource {
       return linearCombination(terms.map((t) => ({ series: t.source.expand(X), coefficient: t.coefficient })));
     },
     modular: {
-      majorant: (X) => majorantSum(terms.map((t) => ({ majorant: modularOf(t.source).majorant(X), coefficient: t.coefficient }))),
+      majorant: (X, h) => majorantSum(terms.map((t) => ({ majorant: modularOf(t.source).majorant(X, h), coefficient: t.coefficient })), h),
       residues: (X, primes) =>
         combineResidues(
           terms.map((t) => ({ series: modularOf(t.source).residues(X, primes), coefficient: t.coefficient })),

@@ -1,22 +1,60 @@
 /**
  * Garner's mixed-radix Chinese remaindering (Knuth, TAOCP vol. 2, §4.3.2): the mixed-radix
- * digits are found in word-size arithmetic, and JSBI is used only to assemble each
- * result. The representative is the one in (−M/2, M/2], M the product of the primes,
- * which is the integer itself whenever |integer| < M/2 (MATH.md §8).
+ * digits v_i (x = v_0 + p_0·v_1 + p_0p_1·v_2 + …, 0 ≤ v_i < p_i) are found in word-size
+ * arithmetic, and JSBI is used only to assemble each result. The representative is the
+ * one in (−M/2, M/2], M the product of the primes, which is the integer itself whenever
+ * |integer| < M/2 (MATH.md §8). The primes are odd, so (M − 1)/2 has the digits
+ * (p_i − 1)/2 and the sign is read off the digits from the top; a negative x is
+ * assembled as −(M − x), whose digits are those of M − 1 − x (p_i − 1 − v_i) plus one.
  */
-import { JSBI, type Int, int } from '../integer.js';
+import { JSBI, type Int, int, ZERO } from '../integer.js';
 import { mulmod, invmod } from './mulmod.js';
 import type { NttPrime } from './ntt-primes.js';
 
+interface GarnerTables {
+  /** inv[i][j] = p_i⁻¹ mod p_j for i < j. */
+  readonly inv: readonly (readonly number[])[];
+  readonly big: readonly Int[];
+}
+
+const tables = new WeakMap<readonly NttPrime[], GarnerTables>();
+
+function tablesFor(primes: readonly NttPrime[]): GarnerTables {
+  let t = tables.get(primes);
+  if (t === undefined) {
+    t = {
+      inv: primes.map((pi, i) => primes.map((pj, j) => (j > i ? invmod(pi.p % pj.p, pj.p) : 0))),
+      big: primes.map((pr) => int(pr.p)),
+    };
+    tables.set(primes, t);
+  }
+  return t;
+}
+
+/** Whether the digits exceed those of (M − 1)/2, i.e. x > M/2. */
+function aboveHalf(v: readonly number[], primes: readonly NttPrime[]): boolean {
+  for (let j = v.length - 1; j >= 0; j--) {
+    const h = (primes[j]!.p - 1) / 2;
+    if (v[j]! !== h) return v[j]! > h;
+  }
+  return false;
+}
+
+function assemble(v: readonly number[], big: readonly Int[]): Int {
+  let top = v.length - 1;
+  while (top > 0 && v[top] === 0) top--;
+  let acc = int(v[top]!);
+  for (let j = top - 1; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, big[j]!), int(v[j]!));
+  return acc;
+}
+
 export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], len: number): Int[] {
   const k = primes.length;
-  const inv: number[][] = primes.map((pi, i) => primes.map((pj, j) => (j > i ? invmod(pi.p % pj.p, pj.p) : 0)));
-  let M = int(1);
-  for (const pr of primes) M = JSBI.multiply(M, int(pr.p));
-  const halfM = JSBI.divide(M, int(2));
+  const { inv, big } = tablesFor(primes);
   const out: Int[] = new Array<Int>(len);
   const v = new Array<number>(k);
   for (let n = 0; n < len; n++) {
+    let zero = true;
     for (let j = 0; j < k; j++) {
       const pj = primes[j]!.p;
       const pinv = 1 / pj;
@@ -27,17 +65,28 @@ export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], l
         x = mulmod(x, inv[i]![j]!, pj, pinv);
       }
       v[j] = x;
+      if (x !== 0) zero = false;
     }
-    let top = k - 1;
-    while (top > 0 && v[top] === 0) top--;
-    if (top === 0 && k > 1) {
-      out[n] = int(v[0]!);
+    if (zero) {
+      out[n] = ZERO;
       continue;
     }
-    let acc = int(v[top]!);
-    for (let j = top - 1; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, int(primes[j]!.p)), int(v[j]!));
-    out[n] = JSBI.greaterThan(acc, halfM) ? JSBI.subtract(acc, M) : acc;
+    if (!aboveHalf(v, primes)) {
+      out[n] = assemble(v, big);
+      continue;
+    }
+    // M − x = (M − 1 − x) + 1: complement the digits, then add one with carries
+    let carry = 1;
+    for (let j = 0; j < k; j++) {
+      let d = primes[j]!.p - 1 - v[j]! + carry;
+      carry = 0;
+      if (d === primes[j]!.p) {
+        d = 0;
+        carry = 1;
+      }
+      v[j] = d;
+    }
+    out[n] = JSBI.unaryMinus(assemble(v, big));
   }
   return out;
 }
-

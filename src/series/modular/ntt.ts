@@ -1,62 +1,91 @@
 /**
- * The number-theoretic transform modulo a word-size prime (iterative radix-2
- * Cooley–Tukey, in place, on Int32Array residues) and the cyclic product it gives:
- * a·b mod (p, x^n − 1) with n a power of two at least |a| + |b| − 1 is the full
- * product. Hot loops use only numbers and typed arrays (ARCHITECTURE.md); the modular
- * product in the butterfly is mulmod.ts's, inlined, with branch-free corrections
- * (`(v >> 31) & p` adds p exactly when v is negative).
+ * The number-theoretic transform modulo a word-size prime, in place on Int32Array
+ * residues, and the cyclic product it gives: a·b mod (p, x^n − 1) with n a power of two
+ * at least |a| + |b| − 1 is the full product. The forward transform is decimation in
+ * frequency (natural order in, bit-reversed out) and the inverse decimation in time
+ * (bit-reversed in, natural out), so a product never permutes (Chu & George, *Inside
+ * the FFT black box*, 2000, ch. 4–5). Twiddles are stored stage by stage, contiguous
+ * (entry half + k is ω_{2·half}^k), each with its quotient w/p in a double so that
+ * ⌊x·w/p⌋ costs one multiplication; the remainder is taken in 32-bit wrapping
+ * arithmetic (mulmod.ts) with branch-free corrections (`(v >> 31) & p` adds p exactly
+ * when v is negative). Hot loops use only numbers and typed arrays (ARCHITECTURE.md).
  */
 import { mulmod, powmod, invmod } from './mulmod.js';
 import type { NttPrime } from './ntt-primes.js';
 
-function bitReverse(a: Int32Array): void {
-  const n = a.length;
-  for (let i = 1, j = 0; i < n; i++) {
-    let bit = n >> 1;
-    for (; j & bit; bit >>= 1) j ^= bit;
-    j ^= bit;
-    if (i < j) {
-      const t = a[i]!;
-      a[i] = a[j]!;
-      a[j] = t;
-    }
-  }
+interface Twiddles {
+  readonly w: Int32Array;
+  readonly wq: Float64Array;
 }
 
-/** Powers of a primitive n-th root of unity (or its inverse), cached per prime and size. */
-const twiddleCache = new Map<string, Int32Array>();
+const twiddleCache = new Map<string, Twiddles>();
 
-function twiddles(prime: NttPrime, n: number, inverse: boolean): Int32Array {
+/** Stage tables for size n: entry half + k is ω^k, ω a primitive (2·half)-th root (or its inverse). */
+function twiddles(prime: NttPrime, n: number, inverse: boolean): Twiddles {
   const key = `${prime.p}:${n}:${inverse ? 1 : 0}`;
   let t = twiddleCache.get(key);
   if (t === undefined) {
-    const { p } = prime;
-    let w = powmod(prime.g, (p - 1) / n, p);
-    if (inverse) w = invmod(w, p);
-    t = new Int32Array(Math.max(1, n >> 1));
-    t[0] = 1;
-    for (let k = 1; k < t.length; k++) t[k] = mulmod(t[k - 1]!, w, p, 1 / p);
+    const p = prime.p | 0;
+    const pinv = 1 / p;
+    const w = new Int32Array(Math.max(2, n));
+    const wq = new Float64Array(w.length);
+    for (let half = 1; half < n; half <<= 1) {
+      let root = powmod(prime.g, (p - 1) / (2 * half), p);
+      if (inverse) root = invmod(root, p);
+      let x = 1;
+      for (let k = 0; k < half; k++) {
+        w[half + k] = x;
+        wq[half + k] = x / p;
+        x = mulmod(x, root, p, pinv);
+      }
+    }
+    t = { w, wq };
     twiddleCache.set(key, t);
   }
   return t;
 }
 
-export function ntt(a: Int32Array, prime: NttPrime, inverse: boolean): void {
-  const { p } = prime;
-  const pinv = 1 / p;
+/** Forward transform (decimation in frequency); the output is in bit-reversed order. */
+export function nttForward(a: Int32Array, prime: NttPrime): void {
+  const p = prime.p | 0;
   const n = a.length;
-  bitReverse(a);
-  const table = twiddles(prime, n, inverse);
-  for (let len = 2; len <= n; len <<= 1) {
-    const half = len >> 1;
-    // the len-th roots are every (n/len)-th entry of the n-th roots
-    const stride = n / len;
-    for (let i = 0; i < n; i += len) {
+  const { w } = twiddles(prime, n, false);
+  const pinv = 1 / p;
+  for (let half = n >> 1; half >= 1; half >>= 1) {
+    for (let i = 0; i < n; i += 2 * half) {
       for (let k = 0; k < half; k++) {
-        const w = table[k * stride]!;
+        const u = a[i + k]!;
+        const v = a[i + k + half]!;
+        let s = u + v - p;
+        s += (s >> 31) & p;
+        let d = u - v;
+        d += (d >> 31) & p;
+        const wk = w[half + k]!;
+        const q = (d * wk * pinv) | 0;
+        let r = (Math.imul(d, wk) - Math.imul(q, p)) | 0;
+        r += (r >> 31) & p;
+        r -= p;
+        r += (r >> 31) & p;
+        a[i + k] = s;
+        a[i + k + half] = r;
+      }
+    }
+  }
+}
+
+/** Inverse transform (decimation in time) of a bit-reversed input, times 1/n unless `unscaled`. */
+export function nttInverse(a: Int32Array, prime: NttPrime, unscaled = false): void {
+  const p = prime.p | 0;
+  const n = a.length;
+  const { w } = twiddles(prime, n, true);
+  const pinv = 1 / p;
+  for (let half = 1; half < n; half <<= 1) {
+    for (let i = 0; i < n; i += 2 * half) {
+      for (let k = 0; k < half; k++) {
         const x = a[i + k + half]!;
-        const q = (x * w * pinv) | 0;
-        let v = (Math.imul(x, w) - Math.imul(q, p)) | 0;
+        const wk = w[half + k]!;
+        const q = (x * wk * pinv) | 0;
+        let v = (Math.imul(x, wk) - Math.imul(q, p)) | 0;
         v += (v >> 31) & p;
         v -= p;
         v += (v >> 31) & p;
@@ -70,39 +99,80 @@ export function ntt(a: Int32Array, prime: NttPrime, inverse: boolean): void {
       }
     }
   }
-  if (inverse) {
-    const ninv = invmod(n, p);
-    for (let i = 0; i < n; i++) a[i] = mulmod(a[i]!, ninv, p, pinv);
+  if (!unscaled) scaleInPlace(a, invmod(n % p, p), p);
+}
+
+function scaleInPlace(a: Int32Array, c: number, p: number): void {
+  const pinv = 1 / p;
+  for (let i = 0; i < a.length; i++) a[i] = mulmod(a[i]!, c, p, pinv);
+}
+
+/** fa ← fa·fb·c pointwise (c folds in the inverse transform's 1/n). */
+export function pointwiseMultiply(fa: Int32Array, fb: Int32Array, c: number, p: number): void {
+  const pinv = 1 / p;
+  for (let i = 0; i < fa.length; i++) {
+    const x = fa[i]!;
+    const y = fb[i]!;
+    const q = Math.floor(x * y * pinv);
+    let v = (Math.imul(x, y) - Math.imul(q, p)) | 0;
+    v += (v >> 31) & p;
+    v -= p;
+    v += (v >> 31) & p;
+    fa[i] = c === 1 ? v : mulmod(v, c, p, pinv);
   }
+}
+
+/** t ← t^k·c pointwise, k ≥ 1 (c folds in the inverse transform's 1/n). */
+export function pointwisePower(t: Int32Array, k: number, c: number, prime: NttPrime): void {
+  const p = prime.p | 0;
+  const pinv = 1 / p;
+  for (let i = 0; i < t.length; i++) {
+    let base = t[i]!;
+    let r = c;
+    for (let e = k; e > 0; e >>= 1) {
+      if (e & 1) {
+        const q = Math.floor(r * base * pinv);
+        let v = (Math.imul(r, base) - Math.imul(q, p)) | 0;
+        v += (v >> 31) & p;
+        v -= p;
+        v += (v >> 31) & p;
+        r = v;
+      }
+      if (e > 1) {
+        const q = Math.floor(base * base * pinv);
+        let v = (Math.imul(base, base) - Math.imul(q, p)) | 0;
+        v += (v >> 31) & p;
+        v -= p;
+        v += (v >> 31) & p;
+        base = v;
+      }
+    }
+    t[i] = r;
+  }
+}
+
+/** The transform length for a product of lengths la and lb. */
+export function transformLength(outLen: number): number {
+  let n = 1;
+  while (n < outLen) n <<= 1;
+  return n;
 }
 
 /** The product of two residue vectors modulo p, of length |a| + |b| − 1. */
 export function nttMultiply(a: Int32Array, b: Int32Array, prime: NttPrime): Int32Array {
   const outLen = a.length + b.length - 1;
-  let n = 1;
-  while (n < outLen) n <<= 1;
+  const n = transformLength(outLen);
   const fa = new Int32Array(n);
   fa.set(a);
-  ntt(fa, prime, false);
+  nttForward(fa, prime);
   // a square needs one forward transform, not two
   let fb = fa;
   if (b !== a) {
     fb = new Int32Array(n);
     fb.set(b);
-    ntt(fb, prime, false);
+    nttForward(fb, prime);
   }
-  const { p } = prime;
-  const pinv = 1 / p;
-  for (let i = 0; i < n; i++) {
-    const x = fa[i]!;
-    const y = fb[i]!;
-    const q = (x * y * pinv) | 0;
-    let v = (Math.imul(x, y) - Math.imul(q, p)) | 0;
-    v += (v >> 31) & p;
-    v -= p;
-    v += (v >> 31) & p;
-    fa[i] = v;
-  }
-  ntt(fa, prime, true);
+  pointwiseMultiply(fa, fb, invmod(n % prime.p, prime.p), prime.p);
+  nttInverse(fa, prime, true);
   return fa.subarray(0, outLen);
 }

@@ -4,16 +4,17 @@
  * engine (expanded exactly, then reduced): its majorant is then the true sum of
  * absolute values, so every source can take part in a modular proof.
  */
-import { JSBI, type Int, ZERO, ONE, abs } from '../integer.js';
+import { JSBI, type Int, ZERO, abs, isZero } from '../integer.js';
 import { type Rational, rcmp } from '../rational.js';
-import type { QZSeries } from '../qz-series.js';
+import { type QZSeries, sliceExponent } from '../qz-series.js';
 import { forEachTerm } from '../slice.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
-import { type Majorant, log2UpperInt, log2LowerInt, up } from './majorant.js';
+import { type Majorant, log2UpperInt, log2LowerInt, up, blockOf, majorantFromLog2, zeroMajorant } from './majorant.js';
 import { type ResidueSeries, residuesOfSeries, truncateResidues } from './residue-series.js';
 
 export interface ModularView {
-  majorant(X: Rational): Majorant;
+  /** Block bounds (block length h q-steps) of |coefficients| up to q-order X. */
+  majorant(X: Rational, h: number): Majorant;
   residues(X: Rational, primes: readonly NttPrime[]): ResidueSeries;
   /** f^k as a view, where the source knows more about its powers than the rules do. */
   power?(k: number): ModularView | undefined;
@@ -23,14 +24,20 @@ interface Expandable {
   expand(X: Rational): QZSeries;
 }
 
-export const ZERO_MAJORANT: Majorant = { log2: -Infinity, den: ONE, avoid: ONE };
-
-/** The exact majorant of an exact series: Σ|numerators| / den, rounded up. */
-export function majorantOfSeries(s: QZSeries): Majorant {
-  let total: Int = ZERO;
-  for (const sl of s.slices) forEachTerm(sl, (_e, c) => (total = JSBI.add(total, abs(c))));
-  if (JSBI.equal(total, ZERO)) return { ...ZERO_MAJORANT, den: s.den, avoid: s.den };
-  return { log2: up(log2UpperInt(total) - log2LowerInt(s.den)), den: s.den, avoid: s.den };
+/** The exact majorant of an exact series to q-order X: per block, Σ|numerators| / den, rounded up. */
+export function majorantOfSeries(s: QZSeries, X: Rational, h: number): Majorant {
+  const first = blockOf(s.start, h);
+  const last = blockOf(X, h);
+  if (last < first) return { ...zeroMajorant(h, first), den: s.den, avoid: s.den };
+  const totals: Int[] = new Array<Int>(last - first + 1).fill(ZERO);
+  s.slices.forEach((sl, i) => {
+    const x = sliceExponent(s, i);
+    if (rcmp(x, X) > 0) return;
+    const j = blockOf(x, h) - first;
+    forEachTerm(sl, (_e, c) => (totals[j] = JSBI.add(totals[j]!, abs(c))));
+  });
+  const lowDen = log2LowerInt(s.den);
+  return majorantFromLog2(h, first, totals.map((t) => (isZero(t) ? -Infinity : up(log2UpperInt(t) - lowDen))), s.den, s.den);
 }
 
 /** The view of a source through the exact engine. */
@@ -41,7 +48,7 @@ export function exactView(src: Expandable): ModularView {
     return last;
   };
   return {
-    majorant: (X) => majorantOfSeries(expand(X)),
+    majorant: (X, h) => majorantOfSeries(expand(X), X, h),
     residues: (X, primes) => {
       const r = residuesOfSeries(expand(X), primes);
       return rcmp(r.exactTo, X) > 0 ? truncateResidues(r, X) : r;
@@ -54,11 +61,11 @@ export function cachedView(v: ModularView): ModularView {
   let best: ResidueSeries | null = null;
   const majorants = new Map<string, Majorant>();
   return {
-    majorant(X) {
-      const key = `${X.num.toString()}/${X.den.toString()}`;
+    majorant(X, h) {
+      const key = `${X.num.toString()}/${X.den.toString()}@${h}`;
       let m = majorants.get(key);
       if (m === undefined) {
-        m = v.majorant(X);
+        m = v.majorant(X, h);
         majorants.set(key, m);
       }
       return m;

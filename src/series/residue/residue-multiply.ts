@@ -15,9 +15,10 @@ import { type Rational, radd, rmin } from '../rational.js';
 import { gcdNumber, lcmNumber } from '../integer.js';
 import { sliceCountTo } from '../qz-series.js';
 import { mulmod } from '../modular/mulmod.js';
-import { nttMultiply, ntt } from '../modular/ntt.js';
+import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength } from '../modular/ntt.js';
+import { invmod } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
-import { type ResidueSeries, regridResidues } from './residue-series.js';
+import { type ResidueSeries, regridResidues, trimColumns } from './residue-series.js';
 
 /**
  * Cost of one NTT butterfly against one accumulated multiply-add of the sparse path,
@@ -115,14 +116,24 @@ function sparseDense(s: Int32Array, sw: number, d: Int32Array, dw: number, rows:
   return out;
 }
 
+/** Rows of width w laid out with stride W ≥ w (Kronecker substitution). */
+function packRows(a: Int32Array, w: number, rows: number, W: number): Int32Array {
+  if (w === W) return a.length === rows * W ? a : a.slice(0, rows * W);
+  const out = new Int32Array(rows * W);
+  for (let i = 0; i < rows; i++) {
+    const from = i * w;
+    const to = i * W;
+    for (let j = 0; j < w; j++) out[to + j] = a[from + j]!;
+  }
+  return out;
+}
+
 function kronecker(a: Int32Array, aw: number, b: Int32Array, bw: number, rows: number, W: number, prime: NttPrime): Int32Array {
   const ra = Math.min(rows, a.length / aw);
   const rb = Math.min(rows, b.length / bw);
-  const pa = new Int32Array(ra * W);
-  const pb = new Int32Array(rb * W);
-  for (let i = 0; i < ra; i++) pa.set(a.subarray(i * aw, (i + 1) * aw), i * W);
-  for (let i = 0; i < rb; i++) pb.set(b.subarray(i * bw, (i + 1) * bw), i * W);
-  const prod = a === b && aw === bw ? nttMultiply(pa, pa, prime) : nttMultiply(pa, pb, prime);
+  const pa = packRows(a, aw, ra, W);
+  const pb = a === b && aw === bw ? pa : packRows(b, bw, rb, W);
+  const prod = nttMultiply(pa, pb, prime);
   const out = new Int32Array(rows * W);
   out.set(prod.subarray(0, Math.min(prod.length, rows * W)));
   return out;
@@ -133,14 +144,13 @@ function perColumn(a: Int32Array, aw: number, b: Int32Array, rows: number, prime
   const { p } = prime;
   const ra = Math.min(rows, a.length / aw);
   const rb = Math.min(rows, b.length);
-  let n = 1;
-  while (n < ra + rb - 1) n <<= 1;
+  const n = transformLength(ra + rb - 1);
   const fb = new Int32Array(n);
   fb.set(b.subarray(0, rb));
-  ntt(fb, prime, false);
+  nttForward(fb, prime);
   const out = new Int32Array(rows * aw);
   const col = new Int32Array(n);
-  const pinv = 1 / p;
+  const ninv = invmod(n % p, p);
   for (let j = 0; j < aw; j++) {
     col.fill(0);
     let any = false;
@@ -150,9 +160,9 @@ function perColumn(a: Int32Array, aw: number, b: Int32Array, rows: number, prime
       if (x !== 0) any = true;
     }
     if (!any) continue;
-    ntt(col, prime, false);
-    for (let i = 0; i < n; i++) col[i] = mulmod(col[i]!, fb[i]!, p, pinv);
-    ntt(col, prime, true);
+    nttForward(col, prime);
+    pointwiseMultiply(col, fb, ninv, p);
+    nttInverse(col, prime, true);
     for (let i = 0; i < rows; i++) out[i * aw + j] = col[i]!;
   }
   return out;
@@ -216,7 +226,7 @@ export function multiplyResiduesBy(forced: ResidueProductRoute | null, x: Residu
         return kronecker(da, a.width, db, b.width, rows, width, prime);
     }
   });
-  return {
+  return trimColumns({
     primes: a.primes,
     start: al.start,
     qDen: al.qDen,
@@ -226,5 +236,5 @@ export function multiplyResiduesBy(forced: ResidueProductRoute | null, x: Residu
     zStep: al.zStep,
     width,
     data,
-  };
+  });
 }

@@ -10,7 +10,9 @@
 import { type Rational, rat, rmul, radd, rsub, rmin } from '../rational.js';
 import { sliceCountTo } from '../qz-series.js';
 import { mulmod, powmod, invmod } from '../modular/mulmod.js';
-import { type ResidueSeries, truncateResidues } from './residue-series.js';
+import { nttForward, nttInverse, transformLength, pointwisePower } from '../modular/ntt.js';
+import { NTT_MAX_LOG } from '../modular/ntt-primes.js';
+import { type ResidueSeries, truncateResidues, trimColumns } from './residue-series.js';
 import { multiplyResidues, NTT_BUTTERFLY_COST } from './residue-multiply.js';
 
 /** 1/1, …, 1/n mod p by inv(i) = −⌊p/i⌋·inv(p mod i). */
@@ -45,22 +47,22 @@ function millerOnePrime(a: Int32Array, k: number, rows: number, p: number): Int3
   const invA0 = invmod(a0, p);
   const inv = inverseTable(rows, p);
   const sMax = maxA * (Math.abs(k + 1) * rows + rows);
-  const perReduction = Math.floor(2 ** 53 / (Math.max(1, sMax) * p));
+  // |term| ≤ sMax·p; a chunk of perReduction terms plus a reduced remainder stays below 2^53
+  const perReduction = Math.floor(2 ** 52 / (Math.max(1, sMax) * p));
   const m = idx.length;
+  const at = Int32Array.from(idx);
+  const sy = Float64Array.from(sym);
+  const cj = Float64Array.from(idx, (j, t) => (k + 1) * j * sym[t]!);
+  let live = 0;
   for (let n = 1; n < rows; n++) {
     let acc = 0;
+    while (live < m && at[live]! <= n) live++;
     if (perReduction >= 1) {
-      let since = 0;
-      for (let t = 0; t < m; t++) {
-        const j = idx[t]!;
-        if (j > n) break;
-        acc += ((k + 1) * j - n) * sym[t]! * b[n - j]!;
-        if (++since === perReduction) {
-          acc %= p;
-          since = 0;
-        }
+      for (let t0 = 0; t0 < live; t0 += perReduction) {
+        const end = Math.min(live, t0 + perReduction);
+        for (let t = t0; t < end; t++) acc += (cj[t]! - n * sy[t]!) * b[n - at[t]!]!;
+        acc %= p;
       }
-      acc %= p;
       if (acc < 0) acc += p;
     } else {
       for (let t = 0; t < m; t++) {
@@ -115,21 +117,94 @@ function truncateIfPast(r: ResidueSeries, X: Rational): ResidueSeries {
 }
 
 /**
- * Miller costs (non-zero terms)·rows multiply-adds; squaring about log₂k NTT products
- * of twice the length, each ≈ 3·n·log₂n butterflies (NTT_BUTTERFLY_COST each).
+ * f^k, k ≥ 2, in the transform domain: the rows f needs, packed with stride
+ * W = k(w − 1) + 1 so that no power of a row spills into the next (Kronecker), one
+ * forward transform long enough for the whole untruncated power, k-th powers pointwise,
+ * one inverse transform.
  */
-function millerCheaper(f: ResidueSeries, k: number): boolean {
-  const a = f.data[0]!;
-  let terms = 0;
-  for (let i = 0; i < a.length; i++) if (a[i] !== 0) terms++;
-  let n = 1;
-  while (n < 2 * f.rows) n <<= 1;
-  const squaring = Math.ceil(Math.log2(k + 1)) * NTT_BUTTERFLY_COST * 3 * n * Math.log2(n);
-  return terms * f.rows <= squaring;
+export function powerTransformResidues(f: ResidueSeries, k: number, X: Rational): ResidueSeries {
+  const start = rmul(f.start, rat(k));
+  const exactTo = rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1))));
+  const rows = sliceCountTo(start, f.qDen, exactTo);
+  const used = Math.min(rows, f.rows);
+  const W = k * (f.width - 1) + 1;
+  const n = transformLength(k * ((used - 1) * W + f.width - 1) + 1);
+  const data = f.primes.map((prime, pi) => {
+    const { p } = prime;
+    const a = f.data[pi]!;
+    const t = new Int32Array(n);
+    for (let i = 0; i < used; i++) for (let j = 0; j < f.width; j++) t[i * W + j] = a[i * f.width + j]!;
+    nttForward(t, prime);
+    pointwisePower(t, k, invmod(n % p, p), prime);
+    nttInverse(t, prime, true);
+    return t.slice(0, rows * W);
+  });
+  return trimColumns({ ...f, start, rows, exactTo, zLo: f.zLo * k, width: W, data });
+}
+
+function butterflies(n: number): number {
+  return NTT_BUTTERFLY_COST * 0.5 * n * Math.log2(n);
+}
+
+type PowerRoute = 'miller' | 'transform' | 'squaring';
+
+/**
+ * The cheapest route by operation counts: Miller (non-zero terms)·rows multiply-adds;
+ * the transform route two transforms of the whole power plus n·log₂k multiplications;
+ * squaring about ⌈log₂k⌉ + popcount(k) − 1 products of twice the truncated length,
+ * three transforms each.
+ */
+function choosePowerRoute(f: ResidueSeries, k: number, X: Rational): PowerRoute {
+  if (k < 0) return 'miller';
+  const rows = sliceCountTo(rmul(f.start, rat(k)), f.qDen, rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1)))));
+  const used = Math.min(rows, f.rows);
+  const costs: [PowerRoute, number][] = [];
+  if (millerApplies(f)) {
+    const a = f.data[0]!;
+    let terms = 0;
+    for (let i = 0; i < Math.min(a.length, used); i++) if (a[i] !== 0) terms++;
+    costs.push(['miller', terms * rows]);
+  }
+  const W = k * (f.width - 1) + 1;
+  const whole = k * ((used - 1) * W + f.width - 1) + 1;
+  if (whole <= 2 ** NTT_MAX_LOG) {
+    const n = transformLength(whole);
+    costs.push(['transform', 2 * butterflies(n) + n * Math.log2(k + 1)]);
+  }
+  costs.push(['squaring', squaringCost(f.width, rows, k)]);
+  costs.sort((x, y) => x[1] - y[1]);
+  return costs[0]![0];
+}
+
+/** Transforms of the squaring chain: a square costs two, a product three, each of twice the truncated rows at its width. */
+function squaringCost(width: number, rows: number, k: number): number {
+  const widthOf = (pow: number): number => pow * (width - 1) + 1;
+  let cost = 0;
+  let have = 0;
+  let pow = 1;
+  for (let e = k; e > 0; e >>= 1) {
+    if (e & 1) {
+      if (have > 0) cost += 3 * butterflies(transformLength(2 * rows * widthOf(have + pow)));
+      have += pow;
+    }
+    if (e > 1) {
+      pow *= 2;
+      cost += 2 * butterflies(transformLength(2 * rows * widthOf(pow)));
+    }
+  }
+  return cost;
 }
 
 export function powerResidues(f: ResidueSeries, k: number, X: Rational): ResidueSeries {
   if (k === 1) return truncateIfPast(f, X);
-  if (millerApplies(f) && (k < 0 || millerCheaper(f, k))) return powerMillerResidues(f, k, X);
-  return powerSquaringResidues(f, k, X);
+  if (k === 0) throw new RangeError('internal: f^0 is the constant 1, not a residue power');
+  switch (choosePowerRoute(f, k, X)) {
+    case 'miller':
+      if (!millerApplies(f)) throw new RangeError('internal: a negative power of a series without a unit lead');
+      return powerMillerResidues(f, k, X);
+    case 'transform':
+      return powerTransformResidues(f, k, X);
+    default:
+      return powerSquaringResidues(f, k, X);
+  }
 }

@@ -118,3 +118,30 @@ export function nonZeroCount(r: ResidueSeries): number {
   for (let i = 0; i < a.length; i++) if (a[i] !== 0) n++;
   return n;
 }
+
+/**
+ * The same series on the narrowest grid: columns that are zero in every row and modulo
+ * every prime are dropped at both ends (a product's rectangle is the sum of its factors'
+ * widths, its support much narrower once rows past the q-order are cut).
+ */
+export function trimColumns(r: ResidueSeries): ResidueSeries {
+  const { width, rows } = r;
+  let lo = width;
+  let hi = -1;
+  for (const a of r.data) {
+    for (let i = 0; i < rows; i++) {
+      const base = i * width;
+      for (let j = 0; j < lo; j++) if (a[base + j] !== 0) { lo = j; break; }
+      for (let j = width - 1; j > hi; j--) if (a[base + j] !== 0) { hi = j; break; }
+    }
+  }
+  if (hi < lo) return { ...r, zLo: 0, zStep: 1, width: 1, data: r.data.map(() => new Int32Array(rows)) };
+  if (lo === 0 && hi === width - 1) return r;
+  const w = hi - lo + 1;
+  const data = r.data.map((a) => {
+    const out = new Int32Array(rows * w);
+    for (let i = 0; i < rows; i++) out.set(a.subarray(i * width + lo, i * width + hi + 1), i * w);
+    return out;
+  });
+  return { ...r, zLo: r.zLo + lo * r.zStep, width: w, zStep: w === 1 ? 1 : r.zStep, data };
+}
