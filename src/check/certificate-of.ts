@@ -49,7 +49,7 @@ export function certificateOf(v: Verdict, toolVersion: string): Certificate | nu
     ...(v.type === undefined ? {} : { type: v.type }),
     ...(v.normalForm === undefined ? {} : { normalForm: normalFormOf(v.normalForm) }),
     ...(compared ? { bound } : {}),
-    route: v.bound?.route === undefined ? { route: 'exact' } : { route: 'modular', primes: [...v.bound.route.primes], heightBits: v.bound.route.heightBits },
+    route: v.route === undefined ? { route: 'exact' } : { route: 'modular', primes: [...v.route.primes], heightBits: v.route.heightBits },
     ...(compared
       ? { comparison: { coefficients: v.evidence.coefficients, digest: { algorithm: 'sha256', list: COEFFICIENT_LIST_NAME, value: v.evidence.sha256 } } }
       : {}),

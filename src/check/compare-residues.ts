@@ -46,8 +46,11 @@ export interface ModularSides {
   readonly route: ModularRouteRecord;
 }
 
-/** Residues of both sides to X with primes enough for both; null when the table is too short. */
-export function modularSides(ls: SeriesSource, rs: SeriesSource, X: Rational): ModularSides | null {
+/**
+ * Residues of both sides to X with primes enough for both; null when the table is too
+ * short or more than `maxPrimes` would be needed.
+ */
+export function modularSides(ls: SeriesSource, rs: SeriesSource, X: Rational, maxPrimes = Infinity): ModularSides | null {
   const lv = modularOf(ls);
   const rv = modularOf(rs);
   const h = majorantBlockLength(X, rmin(ls.valuation, rs.valuation));
@@ -56,7 +59,7 @@ export function modularSides(ls: SeriesSource, rs: SeriesSource, X: Rational): M
   const den = lcm(ml.den, mr.den);
   const bits = heightBitsOf(Math.max(majorantMaxLog2(ml), majorantMaxLog2(mr)), den);
   const choice = choosePrimes(bits, lcm(lcm(ml.avoid, mr.avoid), den));
-  if (choice === null) return null;
+  if (choice === null || choice.primes.length > maxPrimes) return null;
   return {
     left: lv.residues(X, choice.primes),
     right: rv.residues(X, choice.primes),

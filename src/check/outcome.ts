@@ -3,5 +3,5 @@ import type { Verdict } from '../verdict/index.js';
 
 export type Outcome = Pick<
   Verdict,
-  'verdict' | 'type' | 'leftType' | 'rightType' | 'compared' | 'bound' | 'mismatch' | 'reason' | 'normalForm' | 'diagnostics' | 'evidence'
+  'verdict' | 'type' | 'leftType' | 'rightType' | 'compared' | 'bound' | 'mismatch' | 'route' | 'reason' | 'normalForm' | 'diagnostics' | 'evidence'
 >;

@@ -5,7 +5,7 @@
  * the diagnostic, the reason); `--verbose` adds how the verdict was reached. A
  * summary line closes the report.
  */
-import { asExpected, summarize, type BoundRecord, type Verdict, type VerdictKind } from '../verdict/index.js';
+import { asExpected, summarize, type Verdict, type VerdictKind } from '../verdict/index.js';
 import { formatDiagnostic } from '../lang/index.js';
 import type { Reporter, ReportInput, ReportStyle } from './reporter.js';
 import { palette, type Palette, type Paint } from './palette.js';
@@ -84,17 +84,17 @@ function verboseLines(v: Verdict, p: Palette): string[] {
     rows.push(['bound', b.derivation]);
     const margin = b.marginTo === undefined ? '' : `; margin compared up to ${qPower(b.marginTo)}`;
     rows.push(['checked', `${b.coefficientsChecked} coefficients up to ${qPower(b.qOrder)}${margin}`]);
-    rows.push(['route', routeText(b)]);
   }
+  if (b !== undefined || v.mismatch !== undefined) rows.push(['route', routeText(v)]);
   if (v.assumptions.length > 0) rows.push(['assumptions', v.assumptions.join(', ')]);
   rows.push(['time', `${v.seconds.toFixed(3)} s`]);
   return rows.map(([k, t]) => `${INDENT}${p.faint(k.padEnd(12))}${terminalSafe(t)}`);
 }
 
-function routeText(b: BoundRecord): string {
-  if (b.route === undefined) return 'exact rational arithmetic';
-  const k = b.route.primes.length;
-  return `${k} prime${k === 1 ? '' : 's'} with height bound 2^${b.route.heightBits} (${b.route.primes.join(', ')})`;
+function routeText(v: Verdict): string {
+  if (v.route === undefined) return 'exact rational arithmetic';
+  const k = v.route.primes.length;
+  return `residues modulo ${k} prime${k === 1 ? '' : 's'} with height bound 2^${v.route.heightBits} (${v.route.primes.join(', ')})`;
 }
 
 function claimLines(v: Verdict, sources: ReadonlyMap<string, string>, style: ReportStyle, p: Palette): string[] {

@@ -30,8 +30,6 @@ export interface BoundRecord {
   readonly marginTo?: string;
   /** The numbers the theorem was applied to; filled when evidence is recorded. */
   readonly parameters?: BoundParameters;
-  /** Present when the coefficients were compared modulo primes (MATH.md §8). */
-  readonly route?: ModularRouteRecord;
 }
 
 /** The primes of a modular comparison and the height bound 2^heightBits their product exceeds twice. */
@@ -112,6 +110,8 @@ export interface Verdict {
   readonly assumptions: readonly string[];
   readonly bound?: BoundRecord;
   readonly mismatch?: MismatchRecord;
+  /** Present when the coefficients were compared modulo primes (MATH.md §8). */
+  readonly route?: ModularRouteRecord;
   readonly reason?: string;
   readonly seconds: number;
   readonly normalForm?: NormalFormRecord;
