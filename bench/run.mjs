@@ -1,16 +1,18 @@
 #!/usr/bin/env node
 /**
- * Benchmarks of the exact series engine (`npm run bench` builds first, then runs this
- * file against ../dist). Never run by `npm test`.
+ * Benchmarks of the series engine (`npm run bench` builds first, then runs this file
+ * against ../dist). Never run by `npm test`.
  *
  *   node bench/run.mjs [W1 W2 …] [--quick]
- *   node bench/run.mjs --single W1        (one run; prints {workload, ms, sum, wsum})
+ *   node bench/run.mjs --single W1:modular   (one run; prints {workload, ms, sum, wsum, maxRssMB})
  *
- * For every selected workload (default: all, see workloads.mjs) each run builds fresh
- * sources and expands from scratch:
+ * Every selected workload (default: all, see workloads.mjs) runs by each of its routes —
+ * the modular back-end (residues, majorants, CRT back to exact JSBI values) and the exact
+ * engine — and each run builds fresh sources and expands from scratch:
  *   bestMs   — best of 5 in-process runs (performance.now around the expansion only);
- *   medianMs — median of 5 child processes `--single`, each timing one cold run itself.
- * Checksums (checksum.mjs) of every run must agree, or the bench fails.
+ *   medianMs — median of 5 child processes `--single`, each timing one cold run itself;
+ *   maxRssMB — the largest resident set of those child processes (whole process).
+ * Checksums (checksum.mjs) of every run and route must agree, or the bench fails.
  * Writes bench/results.md and bench/results.json (only the workloads run).
  * `--quick`: one in-process run each, no child processes, no files written (smoke run).
  */
@@ -48,9 +50,9 @@ function sliceIndexOf(series, x) {
 }
 
 /** Times one fresh expansion and checks it is the series asked for. */
-function runOnce(w) {
+function runOnce(w, route) {
   const t0 = performance.now();
-  const series = w.build();
+  const series = w.build(route);
   const ms = performance.now() - t0;
   w.verify?.(series);
   const origin = w.kOrigin === undefined ? null : sliceIndexOf(series, w.kOrigin);
@@ -63,9 +65,9 @@ function runOnce(w) {
   return { ms, sum, wsum };
 }
 
-function runChild(name) {
-  const r = spawnSync(process.execPath, [SELF, '--single', name], { encoding: 'utf8', maxBuffer: 1 << 20 });
-  if (r.status !== 0) throw new Error(`child --single ${name} failed (${r.status ?? r.signal}):\n${r.stderr}`);
+function runChild(name, route) {
+  const r = spawnSync(process.execPath, [SELF, '--single', `${name}:${route}`], { encoding: 'utf8', maxBuffer: 1 << 20 });
+  if (r.status !== 0) throw new Error(`child --single ${name}:${route} failed (${r.status ?? r.signal}):\n${r.stderr}`);
   const lines = r.stdout.trim().split('\n');
   return JSON.parse(lines[lines.length - 1]);
 }
@@ -82,24 +84,35 @@ function sameChecksums(w, a, b, where) {
   }
 }
 
-function benchWorkload(w, quick) {
+function benchWorkload(w, route, quick) {
   const runs = [];
   for (let i = 0; i < (quick ? 1 : RUNS); i++) {
-    runs.push(runOnce(w));
+    runs.push(runOnce(w, route));
     sameChecksums(w, runs[0], runs[i], 'in-process');
   }
   const bestMs = Math.min(...runs.map((r) => r.ms));
   let medianMs = null;
+  let maxRssMB = null;
   if (!quick) {
     const child = [];
     for (let i = 0; i < RUNS; i++) {
-      const c = runChild(w.name);
+      const c = runChild(w.name, route);
       sameChecksums(w, runs[0], c, 'child process');
       child.push(c.ms);
+      maxRssMB = Math.max(maxRssMB ?? 0, c.maxRssMB);
     }
     medianMs = median(child);
   }
-  return { workload: w.name, bestMs: round(bestMs), medianMs: medianMs === null ? null : round(medianMs), sum: runs[0].sum, wsum: runs[0].wsum };
+  return {
+    workload: w.name,
+    route,
+    bestMs: round(bestMs),
+    medianMs: medianMs === null ? null : round(medianMs),
+    sum: runs[0].sum,
+    wsum: runs[0].wsum,
+    maxRssMB: maxRssMB === null ? null : Math.round(maxRssMB),
+    ...(w.referenceMs === undefined ? {} : { referenceMs: w.referenceMs, ratio: Math.round((bestMs / w.referenceMs) * 10) / 10 }),
+  };
 }
 
 function round(ms) {
@@ -114,12 +127,18 @@ function markdown(results, totalMs) {
     `bestMs: best of ${RUNS} in-process runs; medianMs: median of ${RUNS} child processes (one cold run each).`,
     'Checksums are residues mod 2^61 − 1 (bench/checksum.mjs).',
     '',
-    '| workload | series | bestMs | medianMs | sum | wsum |',
-    '|---|---|---:|---:|---:|---:|',
+    'route: `modular` = residues modulo word-size primes under the majorant height bound, then CRT to exact JSBI values (timed); `exact` = the JSBI engine.',
+    'ratio: bestMs over the reference time of the issue (a C library, in-process); the aim is ≤ 4, the goal ≤ 2.',
+    '',
+    '| workload | series | route | bestMs | medianMs | ratio | maxRssMB | sum | wsum |',
+    '|---|---|---|---:|---:|---:|---:|---:|---:|',
   ];
   for (const r of results) {
     const title = (WORKLOADS.find((x) => x.name === r.workload) ?? COLLECTIONS.find((x) => x.name === r.workload)).title;
-    lines.push(`| ${r.workload} | ${title} | ${r.bestMs.toFixed(1)} | ${r.medianMs === null ? '—' : r.medianMs.toFixed(1)} | ${r.sum ?? '—'} | ${r.wsum ?? '—'} |`);
+    const dash = (x) => (x === null || x === undefined ? '—' : x);
+    lines.push(
+      `| ${r.workload} | ${title} | ${dash(r.route)} | ${r.bestMs.toFixed(1)} | ${r.medianMs === null ? '—' : r.medianMs.toFixed(1)} | ${dash(r.ratio)} | ${dash(r.maxRssMB)} | ${r.sum ?? '—'} | ${r.wsum ?? '—'} |`,
+    );
   }
   return lines.join('\n') + '\n';
 }
@@ -134,24 +153,31 @@ function writeAtomic(url, text) {
 function main() {
   const opts = parseArgs(process.argv.slice(2));
   if (opts.single !== null) {
-    const w = workloadByName(opts.single);
-    const r = runOnce(w);
-    process.stdout.write(JSON.stringify({ workload: w.name, ms: r.ms, sum: r.sum, wsum: r.wsum }) + '\n');
+    const [name, route = 'exact'] = opts.single.split(':');
+    const w = workloadByName(name);
+    const r = runOnce(w, route);
+    const maxRssMB = process.resourceUsage().maxRSS / 1024;
+    process.stdout.write(JSON.stringify({ workload: w.name, route, ms: r.ms, sum: r.sum, wsum: r.wsum, maxRssMB }) + '\n');
     return;
   }
   const selected = opts.names.length === 0 ? WORKLOADS : opts.names.filter((n) => !COLLECTIONS.some((c) => c.name === n)).map(workloadByName);
   const t0 = performance.now();
   const results = [];
   for (const w of selected) {
-    const r = benchWorkload(w, opts.quick);
-    results.push(r);
-    console.log(`${r.workload}: best ${r.bestMs} ms, median (child) ${r.medianMs ?? '—'} ms, sum ${r.sum}, wsum ${r.wsum}`);
+    let first = null;
+    for (const route of w.routes) {
+      const r = benchWorkload(w, route, opts.quick);
+      if (first !== null) sameChecksums(w, first, r, `route ${route} against ${first.route}`);
+      first ??= r;
+      results.push(r);
+      console.log(`${r.workload} (${route}): best ${r.bestMs} ms, median (child) ${r.medianMs ?? '—'} ms, max RSS ${r.maxRssMB ?? '—'} MB, sum ${r.sum}, wsum ${r.wsum}`);
+    }
   }
   const collections = opts.names.length === 0 ? COLLECTIONS : COLLECTIONS.filter((c) => opts.names.includes(c.name));
   for (const c of collections) {
     const times = [];
     for (let i = 0; i < (opts.quick ? 1 : RUNS); i++) times.push(runCollectionOnce(c));
-    const r = { workload: c.name, bestMs: round(Math.min(...times)), medianMs: round(median(times)), sum: null, wsum: null };
+    const r = { workload: c.name, route: null, bestMs: round(Math.min(...times)), medianMs: round(median(times)), sum: null, wsum: null, maxRssMB: null };
     results.push(r);
     console.log(`${r.workload}: best ${r.bestMs} ms, median ${r.medianMs} ms`);
   }

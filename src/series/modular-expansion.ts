@@ -4,7 +4,7 @@
  * above 2H, the residues are computed in word-size arithmetic, and CRT recovers the
  * exact series. The route records what the proof used.
  */
-import type { Rational } from './rational.js';
+import { type Rational, rcmp } from './rational.js';
 import type { QZSeries } from './qz-series.js';
 import { type SeriesSource, modularOf } from './series-source.js';
 import { heightBits, majorantBlockLength } from './residue/majorant.js';
@@ -33,6 +33,7 @@ export function modularResidues(s: SeriesSource, X: Rational): ModularResidues |
   const choice = choosePrimes(bits, majorant.avoid);
   if (choice === null) return null;
   const residues = view.residues(X, choice.primes);
+  if (rcmp(residues.exactTo, X) < 0) throw new RangeError('internal: residues short of the q-order asked');
   return { residues, majorant, route: { primes: choice.primes.map((p) => p.p), heightBits: bits } };
 }
 

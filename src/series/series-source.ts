@@ -88,9 +88,12 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
       residues(X, primes) {
         if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
         let acc: ResidueSeries | null = null;
+        let rest = v;
         for (const f of factors) {
           const part = modularOf(f).residues(radd(X, rsub(f.valuation, v)), primes);
-          acc = acc === null ? part : multiplyResidues(acc, part, X);
+          rest = rsub(rest, f.valuation);
+          // the partial product is needed to X − (valuation of the factors still to come)
+          acc = acc === null ? part : multiplyResidues(acc, part, rsub(X, rest));
         }
         return acc!;
       },

@@ -3,6 +3,7 @@ export * from './majorant.js';
 export * from './residue-series.js';
 export * from './residue-multiply.js';
 export * from './residue-power.js';
+export * from './residue-inverse.js';
 export * from './residue-combine.js';
 export * from './residue-align.js';
 export * from './series-of-residues.js';

@@ -14,6 +14,7 @@ import { nttForward, nttInverse, transformLength, pointwisePower } from '../modu
 import { NTT_MAX_LOG } from '../modular/ntt-primes.js';
 import { type ResidueSeries, truncateResidues, trimColumns } from './residue-series.js';
 import { multiplyResidues, NTT_BUTTERFLY_COST } from './residue-multiply.js';
+import { inverseNewtonResidues } from './residue-inverse.js';
 
 /** 1/1, …, 1/n mod p by inv(i) = −⌊p/i⌋·inv(p mod i). */
 function inverseTable(n: number, p: number): Int32Array {
@@ -146,7 +147,24 @@ function butterflies(n: number): number {
   return NTT_BUTTERFLY_COST * 0.5 * n * Math.log2(n);
 }
 
-type PowerRoute = 'miller' | 'transform' | 'squaring';
+type PowerRoute = 'miller' | 'transform' | 'squaring' | 'newton';
+
+function millerWork(f: ResidueSeries, rows: number): number {
+  const a = f.data[0]!;
+  let terms = 0;
+  for (let i = 0; i < Math.min(a.length, rows); i++) if (a[i] !== 0) terms++;
+  return terms * rows;
+}
+
+/**
+ * f^k, k < 0: Miller's recurrence, or 1/f by Newton (about four products of twice the
+ * length in all, three transforms each) raised to |k| by squaring.
+ */
+function negativeRoute(f: ResidueSeries, k: number, X: Rational): PowerRoute {
+  const rows = sliceCountTo(rmul(f.start, rat(k)), f.qDen, rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1)))));
+  const newton = 12 * butterflies(transformLength(2 * rows)) + (k === -1 ? 0 : squaringCost(1, rows, -k));
+  return millerWork(f, rows) <= newton ? 'miller' : 'newton';
+}
 
 /**
  * The cheapest route by operation counts: Miller (non-zero terms)·rows multiply-adds;
@@ -155,16 +173,11 @@ type PowerRoute = 'miller' | 'transform' | 'squaring';
  * three transforms each.
  */
 function choosePowerRoute(f: ResidueSeries, k: number, X: Rational): PowerRoute {
-  if (k < 0) return 'miller';
+  if (k < 0) return negativeRoute(f, k, X);
   const rows = sliceCountTo(rmul(f.start, rat(k)), f.qDen, rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1)))));
   const used = Math.min(rows, f.rows);
   const costs: [PowerRoute, number][] = [];
-  if (millerApplies(f)) {
-    const a = f.data[0]!;
-    let terms = 0;
-    for (let i = 0; i < Math.min(a.length, used); i++) if (a[i] !== 0) terms++;
-    costs.push(['miller', terms * rows]);
-  }
+  if (millerApplies(f)) costs.push(['miller', millerWork(f, rows)]);
   const W = k * (f.width - 1) + 1;
   const whole = k * ((used - 1) * W + f.width - 1) + 1;
   if (whole <= 2 ** NTT_MAX_LOG) {
@@ -204,6 +217,11 @@ export function powerResidues(f: ResidueSeries, k: number, X: Rational): Residue
       return powerMillerResidues(f, k, X);
     case 'transform':
       return powerTransformResidues(f, k, X);
+    case 'newton': {
+      // 1/f is needed to X − (|k| − 1)·v(1/f), v(1/f) = −v(f)
+      const g = inverseNewtonResidues(f, radd(X, rmul(f.start, rat(-k - 1))));
+      return k === -1 ? truncateIfPast(g, X) : powerResidues(g, -k, X);
+    }
     default:
       return powerSquaringResidues(f, k, X);
   }
