@@ -1,7 +1,7 @@
 /**
  * A validator for the subset of JSON Schema (draft 2020-12) that
  * grammar/certificate.schema.json uses: type, const, enum, pattern, minimum,
- * properties, required, additionalProperties (false or a schema), items,
+ * properties, required, additionalProperties (false or a schema), items, minItems,
  * dependentRequired, anyOf, and $ref to "#/$defs/…". Annotation keywords are
  * ignored; any other keyword throws, so the schema cannot silently use something this
  * validator does not check. Small enough to read, so no dependency is needed for it.
@@ -19,6 +19,7 @@ const KNOWN = new Set([
   'required',
   'additionalProperties',
   'items',
+  'minItems',
   'dependentRequired',
   'anyOf',
   '$ref',
@@ -66,6 +67,7 @@ function validateAt(root: Schema, schema: Schema, v: unknown, path: string, erro
     });
     if (!ok) errors.push(`${path}: matches none of anyOf`);
   }
+  if (Array.isArray(v) && typeof schema['minItems'] === 'number' && v.length < schema['minItems']) errors.push(`${path}: fewer than ${schema['minItems']} items`);
   if (Array.isArray(v) && schema['items'] !== undefined) v.forEach((x, i) => validateAt(root, schema['items'] as Schema, x, `${path}[${i}]`, errors));
   if (typeOf(v) !== 'object') return;
   const o = v as Record<string, unknown>;
