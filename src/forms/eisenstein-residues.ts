@@ -1,9 +1,8 @@
 /**
  * E_k on the modular route (MATH.md §8). Residues: σ_{k−1}(n) mod p by a divisor sieve,
  * times the constant c = −2k/B_k mod p (the primes avoid its denominator, 691 for
- * k = 12). Majorant: Σ_{n≤N} σ_{k−1}(n) = Σ_{d≤N} d^{k−1}⌊N/d⌋ ≤ N·Σ_{d≤N} d^{k−2} ≤ N^k,
- * so the cumulative sum of |coefficients| through q^N is at most 1 + |c|·N^k, which
- * bounds every block up to q^N.
+ * k = 12). Majorant per block: the block's count of exponents times |c|·max σ_{k−1}(n)
+ * over the block (log2SigmaBound), plus the constant term 1 in block 0.
  */
 import {
   type Rational,
@@ -23,7 +22,7 @@ import {
   log2UpperRational,
   up,
   zeroMajorant,
-  majorantFromCumulative,
+  majorantFromLog2,
 } from '../series/index.js';
 import { eisensteinConstant } from './eisenstein.js';
 
@@ -50,19 +49,37 @@ function eisensteinResidues(k: number, rows: number, primes: readonly NttPrime[]
   return { primes, start: rat(0), qDen: 1, rows, exactTo: X, zLo: 0, zStep: 1, width: 1, data };
 }
 
+/**
+ * log₂ of a bound of σ_s(n) for every n ≤ m: σ_s(n) = n^s·Σ_{d|n} d^{−s} ≤ ζ(s)·m^s ≤
+ * (1 + 1/(s − 1))·m^s for s ≥ 2 (comparing the sum with ∫_1^∞ x^{−s} dx); σ_1(n) ≤
+ * n·(1 + ln n) (the harmonic sum).
+ */
+function log2SigmaBound(s: number, m: number): number {
+  if (s === 1) return up(Math.log2(m) + Math.log2(1 + Math.log(m)));
+  return up(Math.log2(1 + 1 / (s - 1)) + s * Math.log2(m));
+}
+
 /** E_k's modular view (k even ≥ 2). */
 export function eisensteinView(k: number): ModularView {
   const c = eisensteinConstant(k);
   return cachedView({
     majorant(X, h) {
       if (rcmp(X, rat(0)) < 0) return zeroMajorant(h);
-      const cumulative = (x: Rational): number => {
-        const N = toNumber(rfloor(x));
-        if (N === 0) return 0;
-        const tail = up(log2UpperRational(c) + k * Math.log2(N));
-        return up(tail + Math.log2(1 + 2 ** -tail));
-      };
-      return majorantFromCumulative(h, rat(0), X, cumulative, c.den);
+      const N = toNumber(rfloor(X));
+      const logC = log2UpperRational(c);
+      const blocks: number[] = [];
+      for (let j = 0; j * h <= N; j++) {
+        const lo = Math.max(1, j * h);
+        const hi = Math.min(N, (j + 1) * h - 1);
+        const constant = j === 0 ? 1 : 0;
+        if (hi < lo) {
+          blocks.push(constant === 1 ? 0 : -Infinity);
+          continue;
+        }
+        const tail = up(logC + Math.log2(hi - lo + 1) + log2SigmaBound(k - 1, hi));
+        blocks.push(constant === 1 ? up(tail + Math.log2(1 + 2 ** -tail)) : tail);
+      }
+      return majorantFromLog2(h, 0, blocks, c.den, c.den);
     },
     residues(X, primes) {
       if (rcmp(X, rat(0)) < 0) return zeroResidues(primes, rat(0), 1, X);

@@ -1,25 +1,26 @@
 /**
  * The primes of a modular proof (MATH.md §8): word-size NTT primes, largest first,
  * skipping any that divides a denominator met on the way, until their product M
- * exceeds 2^(b+1) ≥ 2H. ⌊log₂ p⌋ per prime never over-counts log₂ M.
+ * exceeds 2^(b+1) ≥ 2H — compared exactly, in JSBI.
  */
 import { JSBI, type Int, int, isZero } from '../integer.js';
 import { nttPrimes, type NttPrime } from '../modular/ntt-primes.js';
 
 export interface PrimeChoice {
   readonly primes: readonly NttPrime[];
-  /** Σ ⌊log₂ p⌋ ≤ log₂ M. */
-  readonly bits: number;
+  /** The product of the primes. */
+  readonly product: Int;
 }
 
 export function choosePrimes(heightBits: number, avoid: Int): PrimeChoice | null {
+  const need = JSBI.exponentiate(int(2), int(heightBits + 1));
   const chosen: NttPrime[] = [];
-  let bits = 0;
+  let M = int(1);
   for (const pr of nttPrimes()) {
-    if (bits >= heightBits + 2) break;
+    if (JSBI.greaterThan(M, need)) break;
     if (isZero(JSBI.remainder(avoid, int(pr.p)))) continue;
     chosen.push(pr);
-    bits += Math.floor(Math.log2(pr.p));
+    M = JSBI.multiply(M, int(pr.p));
   }
-  return bits >= heightBits + 2 ? { primes: chosen, bits } : null;
+  return JSBI.greaterThan(M, need) ? { primes: chosen, product: M } : null;
 }
