@@ -16,6 +16,7 @@ import {
   type ModularView,
   type ResidueSeries,
   type Majorant,
+  type FactorMajorant,
   type NttPrime,
   rat,
   rsub,
@@ -102,15 +103,16 @@ function sparseEtaMajorant(cube: boolean, X: Rational, h: number): Majorant {
  * e < 0 Rankin's bound of the cumulative sums, block by block.
  */
 function etaMajorant(e: number, X: Rational, h: number): Majorant {
-  const last = blockOf(X, h);
   if (e < 0) {
     const v = rat(e, 24);
     return majorantFromCumulative(h, v, X, (x) => inverseLog2(-e, toNumber(rfloor(rsub(x, v)))));
   }
-  const parts: Majorant[] = [];
-  if (e >= 3) parts.push(majorantPower(sparseEtaMajorant(true, X, h), Math.floor(e / 3), last));
-  if (e % 3 !== 0) parts.push(majorantPower(sparseEtaMajorant(false, X, h), e % 3, last));
-  return majorantProduct(parts, last);
+  const parts: FactorMajorant[] = [];
+  const cubes = Math.floor(e / 3);
+  // each factor is needed to X minus the other's valuation (positive here, so X serves)
+  if (cubes > 0) parts.push({ majorant: majorantPower(sparseEtaMajorant(true, X, h), cubes, rat(1, 8), X), valuation: rat(cubes, 8) });
+  if (e % 3 !== 0) parts.push({ majorant: majorantPower(sparseEtaMajorant(false, X, h), e % 3, rat(1, 24), X), valuation: rat(e % 3, 24) });
+  return majorantProduct(parts, X);
 }
 
 /** η^e's modular view; valuation e/24. */

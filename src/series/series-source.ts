@@ -17,7 +17,7 @@ import { linearCombination } from './add.js';
 import { divideExact } from './divide-exact.js';
 import { substituteLinear } from './substitute.js';
 import { type ModularView, exactView, cachedView } from './residue/modular-view.js';
-import { majorantProduct, majorantPower, majorantSum, zeroMajorant, blockOf } from './residue/majorant.js';
+import { majorantProduct, majorantPower, majorantSum, zeroMajorant } from './residue/majorant.js';
 import { zeroResidues } from './residue/residue-series.js';
 import { multiplyResidues } from './residue/residue-multiply.js';
 import { powerResidues } from './residue/residue-power.js';
@@ -81,8 +81,8 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
       majorant(X, h) {
         if (rcmp(X, v) < 0) return zeroMajorant(h);
         return majorantProduct(
-          factors.map((f) => modularOf(f).majorant(radd(X, rsub(f.valuation, v)), h)),
-          blockOf(X, h),
+          factors.map((f) => ({ majorant: modularOf(f).majorant(radd(X, rsub(f.valuation, v)), h), valuation: f.valuation })),
+          X,
         );
       },
       residues(X, primes) {
@@ -127,7 +127,7 @@ function modularPower(base: SeriesSource, k: number, v: Rational): { modular?: M
     modular: {
       majorant(X, h) {
         if (rcmp(X, v) < 0) return zeroMajorant(h);
-        return majorantPower(modularOf(base).majorant(need(X), h), k, blockOf(X, h));
+        return majorantPower(modularOf(base).majorant(need(X), h), k, base.valuation, X);
       },
       residues(X, primes) {
         if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);

@@ -11,7 +11,7 @@
  * when v is negative). Hot loops use only numbers and typed arrays (ARCHITECTURE.md).
  */
 import { mulmod, powmod, invmod } from './mulmod.js';
-import type { NttPrime } from './ntt-primes.js';
+import { type NttPrime, NTT_MAX_LOG } from './ntt-primes.js';
 
 interface Twiddles {
   readonly w: Int32Array;
@@ -45,10 +45,14 @@ function twiddles(prime: NttPrime, n: number, inverse: boolean): Twiddles {
   return t;
 }
 
+/** The longest transform: every table prime is c·2^NTT_MAX_LOG + 1, so longer roots of unity need not exist. */
+export const NTT_MAX_LENGTH = 2 ** NTT_MAX_LOG;
+
 /** Forward transform (decimation in frequency); the output is in bit-reversed order. */
 export function nttForward(a: Int32Array, prime: NttPrime): void {
   const p = prime.p | 0;
   const n = a.length;
+  if (n > NTT_MAX_LENGTH) throw new RangeError(`internal: an NTT of length ${n} exceeds the primes' 2^${NTT_MAX_LOG}`);
   const { w } = twiddles(prime, n, false);
   const pinv = 1 / p;
   for (let half = n >> 1; half >= 1; half >>= 1) {
@@ -162,6 +166,7 @@ export function transformLength(outLen: number): number {
 export function nttMultiply(a: Int32Array, b: Int32Array, prime: NttPrime): Int32Array {
   const outLen = a.length + b.length - 1;
   const n = transformLength(outLen);
+  if (n > NTT_MAX_LENGTH) throw new RangeError(`internal: an NTT of length ${n} exceeds the primes' 2^${NTT_MAX_LOG}`);
   const fa = new Int32Array(n);
   fa.set(a);
   nttForward(fa, prime);

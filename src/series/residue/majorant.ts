@@ -17,7 +17,7 @@
  * product of every denominator met on the way (MATH.md §8).
  */
 import { JSBI, type Int, ONE, lcm, abs, isZero } from '../integer.js';
-import { type Rational, rfloor, rdiv, rat, rsub, rcmp } from '../rational.js';
+import { type Rational, rfloor, rdiv, rat, rsub, rcmp, radd, rmul } from '../rational.js';
 import { bitLength } from '../modular/multi-modular-product.js';
 
 export interface Majorant {
@@ -128,24 +128,53 @@ function convolve(a: Majorant, b: Majorant, last: number): Majorant {
   return normalised(a.h, first, out, up(a.scale + b.scale), JSBI.multiply(a.den, b.den), lcm(a.avoid, b.avoid));
 }
 
-/** The majorant of Π fᵢ, blocks up to `last`. */
-export function majorantProduct(parts: readonly Majorant[], last: number): Majorant {
-  let acc = parts[0]!;
-  for (let i = 1; i < parts.length; i++) acc = convolve(acc, parts[i]!, last);
-  return parts.length === 1 ? { ...acc, m: cut(acc.m, acc.first, last) } : acc;
+export interface FactorMajorant {
+  readonly majorant: Majorant;
+  /** A lower bound of the factor's valuation. */
+  readonly valuation: Rational;
 }
 
-/** The majorant of f^k, k ≥ 1, blocks up to `last`. */
-export function majorantPower(m: Majorant, k: number, last: number): Majorant {
-  let result: Majorant | null = null;
-  let base = m;
-  let e = k;
-  while (e > 0) {
-    if (e & 1) result = result === null ? base : convolve(result, base, last);
-    e >>= 1;
-    if (e > 0) base = convolve(base, base, last);
+/**
+ * The majorant of Π fᵢ to q-order X. A partial product is kept to X minus the
+ * valuations of the factors still to come — beyond X when they are negative (η^−e) —
+ * since its terms there still meet theirs below X.
+ */
+export function majorantProduct(parts: readonly FactorMajorant[], X: Rational): Majorant {
+  const h = parts[0]!.majorant.h;
+  let rest = rat(0);
+  for (const p of parts) rest = radd(rest, p.valuation);
+  let acc = parts[0]!.majorant;
+  rest = rsub(rest, parts[0]!.valuation);
+  for (let i = 1; i < parts.length; i++) {
+    rest = rsub(rest, parts[i]!.valuation);
+    acc = convolve(acc, parts[i]!.majorant, blockOf(rsub(X, rest), h));
   }
-  return result === null ? m : { ...result, m: cut(result.m, result.first, last) };
+  const last = blockOf(X, h);
+  return { ...acc, m: cut(acc.m, acc.first, last) };
+}
+
+/**
+ * The majorant of f^k, k ≥ 1, to q-order X, v a lower bound of f's valuation: by
+ * squaring, f^j kept to X − (k − j)·v (the same reason as in majorantProduct).
+ */
+export function majorantPower(m: Majorant, k: number, v: Rational, X: Rational): Majorant {
+  const lastFor = (j: number): number => blockOf(rsub(X, rmul(v, rat(k - j))), m.h);
+  let result: Majorant | null = null;
+  let have = 0;
+  let base = m;
+  let pow = 1;
+  for (let e = k; e > 0; e >>= 1) {
+    if (e & 1) {
+      have += pow;
+      result = result === null ? base : convolve(result, base, lastFor(have));
+    }
+    if (e > 1) {
+      pow *= 2;
+      base = convolve(base, base, lastFor(pow));
+    }
+  }
+  const last = blockOf(X, m.h);
+  return { ...result!, m: cut(result!.m, result!.first, last) };
 }
 
 export interface WeightedMajorant {

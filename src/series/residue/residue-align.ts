@@ -51,7 +51,7 @@ export function alignResidues(list: readonly ResidueSeries[]): AlignedResidues {
     return g.data.map((a) => {
       const out = new Int32Array(rows * width);
       const n = Math.max(0, Math.min(g.rows, rows - shift)) * width;
-      out.set(a.subarray(0, n), shift * width);
+      if (n > 0) out.set(a.subarray(0, n), shift * width);
       return out;
     });
   });

@@ -2,10 +2,10 @@
  * Linear combinations Σ aᵢ·fᵢ of residue series with rational aᵢ (whose denominators
  * the primes avoid), on the common grid, to the lowest q-order among the terms.
  */
-import { type Rational, rmin, rIsZero } from '../rational.js';
+import { type Rational, rmin, rIsZero, rcmp } from '../rational.js';
 import { mulmod } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
-import { type ResidueSeries, rationalResidue, zeroResidues } from './residue-series.js';
+import { type ResidueSeries, rationalResidue, zeroResidues, truncateResidues } from './residue-series.js';
 import { alignResidues } from './residue-align.js';
 
 export interface WeightedResidues {
@@ -36,5 +36,7 @@ export function combineResidues(terms: readonly WeightedResidues[], primes: read
     return out;
   });
   const { start, qDen, rows, zLo, zStep, width } = g;
-  return { primes, start, qDen, rows, exactTo: g.exactTo, zLo, zStep, width, data };
+  const sum: ResidueSeries = { primes, start, qDen, rows, exactTo: g.exactTo, zLo, zStep, width, data };
+  // a term with coefficient 0 still limits the q-order, as in the exact engine
+  return rcmp(exactTo, g.exactTo) < 0 ? truncateResidues(sum, exactTo) : sum;
 }

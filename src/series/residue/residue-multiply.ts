@@ -9,13 +9,14 @@
  * - per ζ-column: a q-only dense factor is transformed once and each column of the
  *   other is multiplied by it;
  * - Kronecker substitution: rows packed with stride W (the product's width), one NTT
- *   product per prime.
+ *   product per prime — per pair of row blocks when the packed product would be longer
+ *   than the primes' largest transform (2^20).
  */
 import { type Rational, radd, rmin } from '../rational.js';
 import { gcdNumber, lcmNumber } from '../integer.js';
 import { sliceCountTo } from '../qz-series.js';
 import { mulmod } from '../modular/mulmod.js';
-import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength } from '../modular/ntt.js';
+import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength, NTT_MAX_LENGTH } from '../modular/ntt.js';
 import { invmod } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 import { type ResidueSeries, regridResidues, trimColumns } from './residue-series.js';
@@ -137,11 +138,25 @@ function packRows(a: Int32Array, w: number, rows: number, W: number): Int32Array
 function kronecker(a: Int32Array, aw: number, b: Int32Array, bw: number, rows: number, W: number, prime: NttPrime): Int32Array {
   const ra = Math.min(rows, a.length / aw);
   const rb = Math.min(rows, b.length / bw);
-  const pa = packRows(a, aw, ra, W);
-  const pb = a === b && aw === bw ? pa : packRows(b, bw, rb, W);
-  const prod = nttMultiply(pa, pb, prime);
   const out = new Int32Array(rows * W);
-  out.set(prod.subarray(0, Math.min(prod.length, rows * W)));
+  // blocks of rows small enough that each packed product fits one transform
+  const block = Math.max(1, Math.floor(NTT_MAX_LENGTH / (2 * W)));
+  const p = prime.p | 0;
+  for (let ia = 0; ia < ra; ia += block) {
+    const pa = packRows(a.subarray(ia * aw, Math.min(ra, ia + block) * aw), aw, Math.min(block, ra - ia), W);
+    for (let ib = 0; ib < rb && ia + ib < rows; ib += block) {
+      const pb = a === b && aw === bw && ia === ib ? pa : packRows(b.subarray(ib * bw, Math.min(rb, ib + block) * bw), bw, Math.min(block, rb - ib), W);
+      const prod = nttMultiply(pa, pb, prime);
+      const base = (ia + ib) * W;
+      const n = Math.min(prod.length, out.length - base);
+      for (let t = 0; t < n; t++) {
+        let v = out[base + t]! + prod[t]!;
+        v -= p;
+        v += (v >> 31) & p;
+        out[base + t] = v;
+      }
+    }
+  }
   return out;
 }
 
@@ -189,11 +204,15 @@ function chooseRoute(al: Aligned): Route {
     ['sparse-a', sparseWork(a.data[0]!, a.width, rb, b.width, rows)],
     ['sparse-b', sparseWork(b.data[0]!, b.width, ra, a.width, rows)],
   ];
+  // transforms longer than NTT_MAX_LENGTH have no roots of unity modulo the table's primes
   const nk = 2 ** log2ceil((ra + rb) * width);
-  costs.push(['kronecker', NTT_BUTTERFLY_COST * 1.5 * nk * log2ceil(nk)]);
+  // longer products are cut into blocks of rows (see kronecker), one transform each
+  if (2 * width <= NTT_MAX_LENGTH) costs.push(['kronecker', NTT_BUTTERFLY_COST * 1.5 * nk * log2ceil(nk) * Math.max(1, nk / NTT_MAX_LENGTH)]);
   const nc = 2 ** log2ceil(ra + rb);
-  if (b.width === 1) costs.push(['column-a', NTT_BUTTERFLY_COST * (a.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
-  if (a.width === 1) costs.push(['column-b', NTT_BUTTERFLY_COST * (b.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
+  if (nc <= NTT_MAX_LENGTH) {
+    if (b.width === 1) costs.push(['column-a', NTT_BUTTERFLY_COST * (a.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
+    if (a.width === 1) costs.push(['column-b', NTT_BUTTERFLY_COST * (b.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
+  }
   costs.sort((x, y) => x[1] - y[1]);
   return costs[0]![0];
 }

@@ -7,7 +7,7 @@
  * base (η by Euler's pentagonal theorem) makes it O(terms·N). Everything else is
  * repeated squaring, truncated to the rows asked for.
  */
-import { type Rational, rat, rmul, radd, rsub, rmin } from '../rational.js';
+import { type Rational, rat, rmul, radd, rsub, rmin, rcmp } from '../rational.js';
 import { sliceCountTo } from '../qz-series.js';
 import { mulmod, powmod, invmod } from '../modular/mulmod.js';
 import { nttForward, nttInverse, transformLength, pointwisePower } from '../modular/ntt.js';
@@ -98,23 +98,28 @@ export function powerMillerResidues(f: ResidueSeries, k: number, X: Rational): R
 /** f^k, k ≥ 1, to q-order X by repeated squaring. */
 export function powerSquaringResidues(f: ResidueSeries, k: number, X: Rational): ResidueSeries {
   if (k < 1) throw new RangeError('internal: repeated squaring needs k ≥ 1');
+  // f^j is needed to X − (k − j)·v(f): beyond X when v(f) < 0, since the factors still
+  // to come bring the order down again
+  const need = (j: number): Rational => rsub(X, rmul(f.start, rat(k - j)));
   let result: ResidueSeries | null = null;
+  let have = 0;
   let base = f;
   let pow = 1;
-  let e = k;
-  while (e > 0) {
-    if (e & 1) result = result === null ? base : multiplyResidues(result, base, X);
-    e >>= 1;
-    if (e === 0) break;
-    pow *= 2;
-    // f^pow is needed only to X − (k − pow)·v(f)
-    base = multiplyResidues(base, base, rsub(X, rmul(f.start, rat(k - pow))));
+  for (let e = k; e > 0; e >>= 1) {
+    if (e & 1) {
+      have += pow;
+      result = result === null ? base : multiplyResidues(result, base, need(have));
+    }
+    if (e > 1) {
+      pow *= 2;
+      base = multiplyResidues(base, base, need(pow));
+    }
   }
   return truncateIfPast(result!, X);
 }
 
 function truncateIfPast(r: ResidueSeries, X: Rational): ResidueSeries {
-  return sliceCountTo(r.start, r.qDen, X) < r.rows ? truncateResidues(r, X) : r;
+  return rcmp(r.exactTo, X) > 0 ? truncateResidues(r, X) : r;
 }
 
 /**
@@ -162,6 +167,7 @@ function millerWork(f: ResidueSeries, rows: number): number {
  */
 function negativeRoute(f: ResidueSeries, k: number, X: Rational): PowerRoute {
   const rows = sliceCountTo(rmul(f.start, rat(k)), f.qDen, rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1)))));
+  if (transformLength(2 * rows) > 2 ** NTT_MAX_LOG) return 'miller';
   const newton = 12 * butterflies(transformLength(2 * rows)) + (k === -1 ? 0 : squaringCost(1, rows, -k));
   return millerWork(f, rows) <= newton ? 'miller' : 'newton';
 }
