@@ -87,6 +87,17 @@ function sparseDense(s: Int32Array, sw: number, d: Int32Array, dw: number, rows:
   const dRows = Math.min(rows, d.length / dw);
   let load = 0;
   const limit = 2 ** 52 / p;
+  // the non-zero columns of each row of d, [lo, hi): products skip the zeros around them
+  const lo = new Int32Array(dRows);
+  const hi = new Int32Array(dRows);
+  for (let r = 0; r < dRows; r++) {
+    let a = 0;
+    let b = dw;
+    while (a < b && d[r * dw + a] === 0) a++;
+    while (b > a && d[r * dw + b - 1] === 0) b--;
+    lo[r] = a;
+    hi[r] = b;
+  }
   for (let i = 0; i < sRows; i++) {
     const rowsLeft = Math.min(dRows, rows - i);
     for (let j = 0; j < sw; j++) {
@@ -103,10 +114,12 @@ function sparseDense(s: Int32Array, sw: number, d: Int32Array, dw: number, rows:
       for (let r = 0; r < rowsLeft; r++) {
         const base = (i + r) * W + j;
         const drow = r * dw;
+        const k0 = lo[r]!;
+        const k1 = hi[r]!;
         if (small) {
-          for (let k = 0; k < dw; k++) acc[base + k] += sym * d[drow + k]!;
+          for (let k = k0; k < k1; k++) acc[base + k] += sym * d[drow + k]!;
         } else {
-          for (let k = 0; k < dw; k++) {
+          for (let k = k0; k < k1; k++) {
             const x = d[drow + k]!;
             if (x !== 0) acc[base + k] += mulmod(c, x, p, pinv);
           }

@@ -152,7 +152,22 @@ function butterflies(n: number): number {
   return NTT_BUTTERFLY_COST * 0.5 * n * Math.log2(n);
 }
 
-type PowerRoute = 'miller' | 'transform' | 'squaring' | 'newton';
+type PowerRoute = 'miller' | 'transform' | 'squaring' | 'newton' | 'repeated';
+
+function nonZeroEntries(f: ResidueSeries, rows: number): number {
+  const a = f.data[0]!;
+  const end = Math.min(a.length, rows * f.width);
+  let n = 0;
+  for (let i = 0; i < end; i++) if (a[i] !== 0) n++;
+  return n;
+}
+
+/** f^k, k ≥ 2, as f·f·…·f: k − 1 products by f, each kept to X − (k − j)·v(f). */
+export function powerRepeatedResidues(f: ResidueSeries, k: number, X: Rational): ResidueSeries {
+  let result = f;
+  for (let j = 2; j <= k; j++) result = multiplyResidues(result, f, rsub(X, rmul(f.start, rat(k - j))));
+  return truncateIfPast(result, X);
+}
 
 function millerWork(f: ResidueSeries, rows: number): number {
   const a = f.data[0]!;
@@ -191,6 +206,11 @@ function choosePowerRoute(f: ResidueSeries, k: number, X: Rational): PowerRoute 
     costs.push(['transform', 2 * butterflies(n) + n * Math.log2(k + 1)]);
   }
   costs.push(['squaring', squaringCost(f.width, rows, k)]);
+  // a sparse base (theta) is cheapest multiplied in k − 1 times, by the sparse path
+  const nnz = nonZeroEntries(f, used);
+  let repeated = 0;
+  for (let j = 2; j <= k; j++) repeated += (nnz * rows * (j * (f.width - 1) + 1)) / 2;
+  costs.push(['repeated', repeated]);
   costs.sort((x, y) => x[1] - y[1]);
   return costs[0]![0];
 }
@@ -223,6 +243,8 @@ export function powerResidues(f: ResidueSeries, k: number, X: Rational): Residue
       return powerMillerResidues(f, k, X);
     case 'transform':
       return powerTransformResidues(f, k, X);
+    case 'repeated':
+      return powerRepeatedResidues(f, k, X);
     case 'newton': {
       // 1/f is needed to X − (|k| − 1)·v(1/f), v(1/f) = −v(f)
       const g = inverseNewtonResidues(f, radd(X, rmul(f.start, rat(-k - 1))));

@@ -24,6 +24,7 @@ import {
   powerMillerResidues,
   powerSquaringResidues,
   powerTransformResidues,
+  powerRepeatedResidues,
   millerApplies,
   nttPrimes,
   makeSeries,
@@ -132,7 +133,7 @@ describe('squaring, transform and dispatcher routes', () => {
       fc.property(base, fc.integer({ min: 1, max: 5 }), orderArb, primeSetArb(), (f, k, o, anyPrimes) => {
         const X = orderFor(f, k, o);
         const routes: Route[] = [powerSquaringResidues];
-        if (k >= 2) routes.push(powerTransformResidues, powerResidues);
+        if (k >= 2) routes.push(powerTransformResidues, powerRepeatedResidues, powerResidues);
         checkPower(f, k, X, anyPrimes, routes);
       }),
       { seed: SEED, numRuns: 100 },
@@ -142,7 +143,7 @@ describe('squaring, transform and dispatcher routes', () => {
     const base = seriesArb({ maxRows: 10, width: 0, bits: [1, 8, 30], oneColumn: -2 });
     fc.assert(
       fc.property(base, fc.integer({ min: 2, max: 7 }), orderArb, primeSetArb(), (f, k, o, anyPrimes) => {
-        checkPower(f, k, orderFor(f, k, o), anyPrimes, [powerSquaringResidues, powerTransformResidues, powerResidues]);
+        checkPower(f, k, orderFor(f, k, o), anyPrimes, [powerSquaringResidues, powerTransformResidues, powerRepeatedResidues, powerResidues]);
       }),
       { seed: SEED, numRuns: 60 },
     );
@@ -174,6 +175,7 @@ describe('long powers: Miller against the transform and squaring routes', () => 
       const m = residueTerms(powerMillerResidues(r, k, X));
       expect(residueTerms(powerTransformResidues(r, k, X))).toEqual(m);
       expect(residueTerms(powerSquaringResidues(r, k, X))).toEqual(m);
+      expect(residueTerms(powerRepeatedResidues(r, k, X))).toEqual(m);
       expect(residueTerms(powerResidues(r, k, X))).toEqual(m);
     }
     // f^−7 · f^7 = 1 to the order both know
