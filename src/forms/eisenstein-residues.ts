@@ -23,6 +23,7 @@ import {
   up,
   zeroMajorant,
   majorantFromLog2,
+  withOffset,
 } from '../series/index.js';
 import { eisensteinConstant } from './eisenstein.js';
 
@@ -79,7 +80,7 @@ export function eisensteinView(k: number): ModularView {
         const tail = up(logC + Math.log2(hi - lo + 1) + log2SigmaBound(k - 1, hi));
         blocks.push(constant === 1 ? up(tail + Math.log2(1 + 2 ** -tail)) : tail);
       }
-      return majorantFromLog2(h, 0, blocks, c.den, c.den);
+      return withOffset(majorantFromLog2(h, 0, blocks, c.den, c.den), rat(0));
     },
     residues(X, primes) {
       if (rcmp(X, rat(0)) < 0) return zeroResidues(primes, rat(0), 1, X);

@@ -31,6 +31,7 @@ import {
   zeroMajorant,
   blockOf,
   majorantFromLog2,
+  withOffset,
   majorantFromCumulative,
   majorantPower,
   majorantProduct,
@@ -94,17 +95,48 @@ function sparseEtaMajorant(cube: boolean, X: Rational, h: number): Majorant {
     }
   }
   // block sums are integers below 2^53: exact in doubles
-  return majorantFromLog2(h, first, sums.map((x) => (x === 0 ? -Infinity : up(Math.log2(x)))));
+  return withOffset(majorantFromLog2(h, first, sums.map((x) => (x === 0 ? -Infinity : up(Math.log2(x))))), v);
+}
+
+/** Up to this many q-steps 1/η^a is majorised by its own coefficients (O(N²) doubles). */
+const INVERSE_EXACT_STEPS = 4000;
+
+/**
+ * The coefficients b_n of Π(1 − qⁿ)^(−a) in doubles by the recurrence of the logarithmic
+ * derivative, n·b_n = a·Σ_{j=1..n} σ(j)·b_{n−j} (Apostol, *Introduction to analytic number
+ * theory*, Thm 14.8, for a = 1; the same proof for any a). Every term is positive, so
+ * each b_n carries a relative rounding error at most the previous ones' plus (n + 3)·2^−53,
+ * in all below (N + 3)²·2^−53: the block sums are rounded up by that factor. The caller
+ * keeps them below 2^1000 (Rankin's bound), far from overflow.
+ */
+function inverseEtaBlocks(a: number, N: number, v: Rational, h: number): Majorant {
+  const sigma = new Float64Array(N + 1);
+  for (let d = 1; d <= N; d++) for (let m = d; m <= N; m += d) sigma[m] += d;
+  const b = new Float64Array(N + 1);
+  b[0] = 1;
+  for (let n = 1; n <= N; n++) {
+    let s = 0;
+    for (let j = 1; j <= n; j++) s += sigma[j]! * b[n - j]!;
+    b[n] = (a * s) / n;
+  }
+  const first = blockOf(v, h);
+  const sums = new Array<number>(blockOf(radd(v, rat(N)), h) - first + 1).fill(0);
+  for (let n = 0; n <= N; n++) sums[blockOf(radd(v, rat(n)), h) - first] += b[n]!;
+  const margin = 1 + (N + 3) * (N + 3) * 2 ** -52;
+  return withOffset(majorantFromLog2(h, first, sums.map((x) => (x === 0 ? -Infinity : up(Math.log2(x * margin))))), v);
 }
 
 /**
  * The majorant of η^e to X: for e > 0 the product rule applied to
  * (η³)^⌊e/3⌋·η^(e mod 3), from the exact block sums of the two sparse series; for
- * e < 0 Rankin's bound of the cumulative sums, block by block.
+ * e < 0 the coefficients themselves (non-negative) where they are cheap, else Rankin's
+ * bound of the cumulative sums, block by block.
  */
 function etaMajorant(e: number, X: Rational, h: number): Majorant {
   if (e < 0) {
     const v = rat(e, 24);
+    const N = toNumber(rfloor(rsub(X, v)));
+    if (N <= INVERSE_EXACT_STEPS && inverseLog2(-e, N) < 1000) return inverseEtaBlocks(-e, N, v, h);
     return majorantFromCumulative(h, v, X, (x) => inverseLog2(-e, toNumber(rfloor(rsub(x, v)))));
   }
   const parts: FactorMajorant[] = [];
@@ -120,7 +152,7 @@ export function etaPowerView(e: number): ModularView {
   const v = rat(e, 24);
   return cachedView({
     majorant(X, h): Majorant {
-      if (rcmp(X, v) < 0 || e === 0) return rcmp(X, v) < 0 ? zeroMajorant(h) : majorantFromLog2(h, 0, [0]);
+      if (rcmp(X, v) < 0 || e === 0) return rcmp(X, v) < 0 ? zeroMajorant(h) : withOffset(majorantFromLog2(h, 0, [0]), rat(0));
       return etaMajorant(e, X, h);
     },
     residues(X, primes) {

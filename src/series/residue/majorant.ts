@@ -30,6 +30,16 @@ export interface Majorant {
   readonly scale: number;
   readonly den: Int;
   readonly avoid: Int;
+  /**
+   * Known when h = 1 and every exponent is offset + an integer, 0 ≤ offset < 1: a block
+   * then holds one exponent, and a product's terms fall in one block, not two.
+   */
+  readonly offset?: Rational;
+}
+
+/** m with the offset of exponents x + ℤ, when blocks are single q-steps. */
+export function withOffset(m: Majorant, x: Rational): Majorant {
+  return m.h === 1 ? { ...m, offset: rsub(x, rat(JSBI.toNumber(rfloor(x)))) } : m;
 }
 
 /** Relative margin for rounding; far above double rounding (2^-52 per step, ≤ 2^16 terms per sum). */
@@ -87,10 +97,11 @@ export function zeroMajorant(h: number, first = 0): Majorant {
 }
 
 /** Rescales so the largest entry is 1, rounding up; keeps the floor on non-zero entries. */
-function normalised(h: number, first: number, raw: Float64Array, scale: number, den: Int, avoid: Int): Majorant {
+function normalised(h: number, first: number, raw: Float64Array, scale: number, den: Int, avoid: Int, offset?: Rational): Majorant {
+  const known = offset === undefined ? {} : { offset };
   let max = 0;
   for (let j = 0; j < raw.length; j++) max = Math.max(max, raw[j]!);
-  if (max === 0) return { h, first, m: raw, scale: 0, den, avoid };
+  if (max === 0) return { h, first, m: raw, scale: 0, den, avoid, ...known };
   const e = Math.floor(Math.log2(max));
   const f = 2 ** -e;
   for (let j = 0; j < raw.length; j++) {
@@ -102,7 +113,7 @@ function normalised(h: number, first: number, raw: Float64Array, scale: number, 
   for (let j = 0; j < raw.length; j++) top = Math.max(top, raw[j]!);
   // x·2^−e < 2 (up to rounding): divide by 2 once more if needed to stay ≤ 1
   if (top > 1) for (let j = 0; j < raw.length; j++) raw[j] = raw[j]! === 0 ? 0 : Math.max(FLOOR, (raw[j]! / 2) * (1 + MARGIN));
-  return { h, first, m: raw, scale: up(scale + e + (top > 1 ? 1 : 0)), den, avoid };
+  return { h, first, m: raw, scale: up(scale + e + (top > 1 ? 1 : 0)), den, avoid, ...known };
 }
 
 /** Blocks up to `last` only. */
@@ -116,16 +127,26 @@ function convolve(a: Majorant, b: Majorant, last: number): Majorant {
   const first = a.first + b.first;
   const n = Math.max(0, Math.min(a.m.length + b.m.length, last - first + 1));
   const out = new Float64Array(n);
+  // with known offsets a + b lies in block i + j + carry exactly; else in i + j or i + j + 1
+  let offset: Rational | undefined;
+  let lo = 0;
+  let hi = 1;
+  if (a.offset !== undefined && b.offset !== undefined) {
+    const s = radd(a.offset, b.offset);
+    lo = rcmp(s, rat(1)) >= 0 ? 1 : 0;
+    hi = lo;
+    offset = rsub(s, rat(lo));
+  }
   for (let i = 0; i < a.m.length && i < n; i++) {
     const x = a.m[i]!;
     if (x === 0) continue;
     for (let j = 0; j < b.m.length && i + j < n; j++) {
       const t = x * b.m[j]!;
-      out[i + j] += t;
-      if (i + j + 1 < n) out[i + j + 1] += t;
+      if (i + j + lo < n) out[i + j + lo] += t;
+      if (hi !== lo && i + j + hi < n) out[i + j + hi] += t;
     }
   }
-  return normalised(a.h, first, out, up(a.scale + b.scale), JSBI.multiply(a.den, b.den), lcm(a.avoid, b.avoid));
+  return normalised(a.h, first, out, up(a.scale + b.scale), JSBI.multiply(a.den, b.den), lcm(a.avoid, b.avoid), offset);
 }
 
 export interface FactorMajorant {
@@ -207,7 +228,9 @@ export function majorantSum(terms: readonly WeightedMajorant[], h: number): Majo
       if (x !== 0) out[m.first - first + j] += Math.max(FLOOR, x * f);
     }
   }
-  return normalised(h, first, out, scale, den, avoid);
+  const o = live[0]!.majorant.offset;
+  const same = o !== undefined && live.every((t) => t.majorant.offset !== undefined && rcmp(t.majorant.offset, o) === 0);
+  return normalised(h, first, out, scale, den, avoid, same ? o : undefined);
 }
 
 /** log₂ of the largest block bound (−∞ when there are no terms). */
@@ -251,5 +274,5 @@ export function majorantFromCumulative(h: number, v: Rational, X: Rational, log2
     const end = rat((j + 1) * h);
     out.push(log2C(rcmp(end, X) < 0 ? end : X));
   }
-  return majorantFromLog2(h, first, out, den, den);
+  return withOffset(majorantFromLog2(h, first, out, den, den), v);
 }

@@ -9,7 +9,7 @@ import { type Rational, rcmp } from '../rational.js';
 import { type QZSeries, sliceExponent } from '../qz-series.js';
 import { forEachTerm } from '../slice.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
-import { type Majorant, log2UpperInt, log2LowerInt, up, blockOf, majorantFromLog2, zeroMajorant } from './majorant.js';
+import { type Majorant, log2UpperInt, log2LowerInt, up, blockOf, majorantFromLog2, zeroMajorant, withOffset } from './majorant.js';
 import { type ResidueSeries, residuesOfSeries, truncateResidues } from './residue-series.js';
 
 export interface ModularView {
@@ -37,7 +37,9 @@ export function majorantOfSeries(s: QZSeries, X: Rational, h: number): Majorant 
     forEachTerm(sl, (_e, c) => (totals[j] = JSBI.add(totals[j]!, abs(c))));
   });
   const lowDen = log2LowerInt(s.den);
-  return majorantFromLog2(h, first, totals.map((t) => (isZero(t) ? -Infinity : up(log2UpperInt(t) - lowDen))), s.den, s.den);
+  const m = majorantFromLog2(h, first, totals.map((t) => (isZero(t) ? -Infinity : up(log2UpperInt(t) - lowDen))), s.den, s.den);
+  // one slice per q-step: every exponent is start + an integer
+  return s.qDen === 1 ? withOffset(m, s.start) : m;
 }
 
 /** The view of a source through the exact engine. */
