@@ -61,8 +61,16 @@ function millerOnePrime(a: Int32Array, k: number, rows: number, p: number): Int3
     if (perReduction >= 1) {
       for (let t0 = 0; t0 < live; t0 += perReduction) {
         const end = Math.min(live, t0 + perReduction);
-        for (let t = t0; t < end; t++) acc += (cj[t]! - n * sy[t]!) * b[n - at[t]!]!;
-        acc %= p;
+        // two accumulators: the chunk's bound (|term|·perReduction < 2^52) holds for their sum
+        let a1 = 0;
+        let a2 = 0;
+        let t = t0;
+        for (; t + 1 < end; t += 2) {
+          a1 += (cj[t]! - n * sy[t]!) * b[n - at[t]!]!;
+          a2 += (cj[t + 1]! - n * sy[t + 1]!) * b[n - at[t + 1]!]!;
+        }
+        if (t < end) a1 += (cj[t]! - n * sy[t]!) * b[n - at[t]!]!;
+        acc = (acc + a1 + a2) % p;
       }
       if (acc < 0) acc += p;
     } else {
