@@ -1,8 +1,10 @@
 /**
- * `check --jobs N`: claim files are handed to N worker threads from one queue (a
- * worker takes the next file when it is done, so long files do not hold up short
- * ones); results are put back in the order of the files. With N = 1, or a single
- * file, everything runs in this thread and the spinner can name each claim.
+ * `check --jobs N`: claim files are taken from one queue by this thread and N − 1
+ * worker threads (each takes the next file when it is done, so long files do not hold
+ * up short ones; a worker asks for its first file once it has loaded, so this thread
+ * checks files meanwhile and a small collection never waits for start-up); results are
+ * put back in the order of the files. With N = 1, or a single file, everything runs in
+ * this thread and the spinner can name each claim.
  */
 import { Worker } from 'node:worker_threads';
 import { existsSync } from 'node:fs';
@@ -29,31 +31,51 @@ export async function checkPaths(
   }
   const results: (PathResult | undefined)[] = new Array<PathResult | undefined>(paths.length);
   let next = 0;
+  const inFlight = new Map<Worker, number>();
   const runWorker = (): Promise<void> =>
     new Promise((resolve) => {
       const w = new Worker(workerScript, { workerData: { opts } });
-      let current = -1;
       const feed = (): void => {
+        inFlight.delete(w);
         if (next >= paths.length) {
           w.postMessage(null);
           return;
         }
-        current = next++;
+        const current = next++;
+        inFlight.set(w, current);
         fileStarted(paths[current]!);
         w.postMessage({ index: current, path: paths[current] });
       };
-      w.on('message', (m: { index: number; result: PathResult }) => {
-        results[m.index] = m.result;
+      w.on('message', (m: { ready: true } | { index: number; result: PathResult }) => {
+        if ('index' in m) results[m.index] ??= m.result;
         feed();
       });
       w.on('error', (e) => {
-        if (current >= 0 && results[current] === undefined) {
+        const current = inFlight.get(w);
+        if (current !== undefined && results[current] === undefined) {
           results[current] = { ok: false, problem: `internal error in a worker: ${e.message}` };
         }
       });
-      w.on('exit', () => resolve());
-      feed();
+      w.on('exit', () => {
+        inFlight.delete(w);
+        resolve();
+      });
     });
-  await Promise.all(Array.from({ length: workers }, runWorker));
+  const running = Array.from({ length: workers - 1 }, runWorker);
+  while (next < paths.length) {
+    const i = next++;
+    fileStarted(paths[i]!);
+    results[i] = checkPath(paths[i]!, opts, listener);
+    // let the workers' messages in between files
+    await new Promise<void>((r) => setImmediate(r));
+  }
+  // the queue is empty: rather than wait for a worker (maybe still cold) on its last
+  // file, check that file here too and keep whichever result comes first
+  for (const [w, i] of [...inFlight].reverse()) {
+    if (results[i] === undefined) results[i] = checkPath(paths[i]!, opts, listener);
+    await w.terminate();
+    await new Promise<void>((r) => setImmediate(r));
+  }
+  await Promise.all(running);
   return results.map((r, i) => r ?? { ok: false, problem: `internal error: no result for ${paths[i]!.display}` });
 }

@@ -15,6 +15,9 @@ interface Job {
 
 const opts = (workerData as { opts: CheckOptions }).opts;
 
+// ask for the first file only once loaded, so the parent keeps files while workers start
+parentPort?.postMessage({ ready: true });
+
 parentPort?.on('message', (job: Job | null) => {
   if (job === null) {
     parentPort?.close();
