@@ -15,6 +15,7 @@ import { NTT_MAX_LOG } from '../modular/ntt-primes.js';
 import { type ResidueSeries, truncateResidues, trimColumns } from './residue-series.js';
 import { multiplyResidues, NTT_BUTTERFLY_COST } from './residue-multiply.js';
 import { inverseNewtonResidues } from './residue-inverse.js';
+import { sharedTerms, millerFourPrimes } from './miller-four-primes.js';
 
 /** 1/1, …, 1/n mod p by inv(i) = −⌊p/i⌋·inv(p mod i). */
 function inverseTable(n: number, p: number): Int32Array {
@@ -99,7 +100,17 @@ export function powerMillerResidues(f: ResidueSeries, k: number, X: Rational): R
   const exactTo = rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1))));
   const rows = sliceCountTo(start, f.qDen, exactTo);
   if (rows >= f.primes[f.primes.length - 1]!.p) throw new RangeError('internal: too many rows for the primes');
-  const data = f.primes.map((pr, i) => millerOnePrime(f.data[i]!, k, rows, pr.p));
+  const data: Int32Array[] = new Array<Int32Array>(f.primes.length);
+  let i = 0;
+  for (; i + 4 <= f.primes.length; i += 4) {
+    const primes = f.primes.slice(i, i + 4);
+    const arrays = f.data.slice(i, i + 4);
+    const terms = sharedTerms(arrays, primes, rows);
+    const four = terms === null ? null : millerFourPrimes(terms, arrays.map((a) => a[0]!), k, rows, primes);
+    if (four === null) break;
+    four.forEach((a, q) => (data[i + q] = a));
+  }
+  for (; i < f.primes.length; i++) data[i] = millerOnePrime(f.data[i]!, k, rows, f.primes[i]!.p);
   return { ...f, start, rows, exactTo, data, zLo: f.zLo * k, zStep: 1, width: 1 };
 }
 

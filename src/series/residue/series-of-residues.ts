@@ -6,7 +6,7 @@
  */
 import { type Int, ZERO, isZero } from '../integer.js';
 import { type QZSeries, makeSeries } from '../qz-series.js';
-import { type Slice, trimSlice, EMPTY_SLICE } from '../slice.js';
+import { type Slice, EMPTY_SLICE } from '../slice.js';
 import { garner } from '../modular/garner.js';
 import { mulmod } from '../modular/mulmod.js';
 import { type ResidueSeries, residueOf } from './residue-series.js';
@@ -30,20 +30,25 @@ export function numeratorsOfResidues(r: ResidueSeries, den: Int): Int[] {
 
 export function seriesOfResidues(r: ResidueSeries, den: Int): QZSeries {
   const nums = numeratorsOfResidues(r, den);
-  const slices: Slice[] = [];
+  const zero = (x: Int): boolean => x === ZERO || isZero(x);
+  const slices: Slice[] = new Array<Slice>(r.rows);
   for (let i = 0; i < r.rows; i++) {
-    const row = nums.slice(i * r.width, (i + 1) * r.width);
-    if (row.every(isZero)) {
-      slices.push(EMPTY_SLICE);
+    const base = i * r.width;
+    let a = 0;
+    let b = r.width;
+    while (a < b && zero(nums[base + a]!)) a++;
+    while (b > a && zero(nums[base + b - 1]!)) b--;
+    if (a === b) {
+      slices[i] = EMPTY_SLICE;
       continue;
     }
     if (r.zStep === 1) {
-      slices.push(trimSlice(r.zLo, row));
+      slices[i] = { lo: r.zLo + a, c: nums.slice(base + a, base + b) };
       continue;
     }
-    const c = new Array<Int>((r.width - 1) * r.zStep + 1).fill(ZERO);
-    row.forEach((x, j) => (c[j * r.zStep] = x));
-    slices.push(trimSlice(r.zLo, c));
+    const c = new Array<Int>((b - a - 1) * r.zStep + 1).fill(ZERO);
+    for (let j = a; j < b; j++) c[(j - a) * r.zStep] = nums[base + j]!;
+    slices[i] = { lo: r.zLo + a * r.zStep, c };
   }
   return makeSeries(r.start, r.qDen, den, slices, r.exactTo);
 }
