@@ -66,6 +66,13 @@ function align(a: ResidueSeries, b: ResidueSeries, X: Rational): Aligned {
   };
 }
 
+/**
+ * Loop overhead of the sparse path per (term, row) pair, in multiply-adds: measured as
+ * for NTT_BUTTERFLY_COST, from a 61×191 grid times a q-only factor of 61 terms both ways
+ * round (a one-column inner loop costs about four multiply-adds per entry).
+ */
+const SPARSE_ROW_OVERHEAD = 3;
+
 /** Multiply-adds of the sparse path: each non-zero of s in row i meets the other's rows below rows − i. */
 function sparseWork(s: Int32Array, sw: number, otherRows: number, otherWidth: number, rows: number): number {
   let work = 0;
@@ -73,7 +80,7 @@ function sparseWork(s: Int32Array, sw: number, otherRows: number, otherWidth: nu
   for (let i = 0; i < sRows; i++) {
     let nz = 0;
     for (let j = 0; j < sw; j++) if (s[i * sw + j] !== 0) nz++;
-    work += nz * Math.min(otherRows, rows - i) * otherWidth;
+    work += nz * Math.min(otherRows, rows - i) * (otherWidth + SPARSE_ROW_OVERHEAD);
   }
   return work;
 }
