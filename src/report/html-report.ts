@@ -15,6 +15,7 @@ import { typeRecordText } from './type-record-text.js';
 import { xmlText } from './xml-text.js';
 import { HTML_STYLE } from './html-style.js';
 import { gridNote, gridTable } from './coefficient-grid-html.js';
+import { routeText } from './route-text.js';
 
 const MARKS: Readonly<Record<VerdictKind, string>> = { proved: '✓', refuted: '✗', unproved: '?', error: '!' };
 const ORDER: readonly VerdictKind[] = ['proved', 'refuted', 'unproved', 'error'];
@@ -58,6 +59,7 @@ function facts(v: Verdict): string {
     rows.push(fact('bound', `Theorem ${b.theorem}: ${xmlText(b.derivation)}`));
     rows.push(fact('checked', `${b.coefficientsChecked} coefficient${b.coefficientsChecked === 1 ? '' : 's'} up to q<sup>${xmlText(b.qOrder)}</sup>${b.marginTo === undefined ? '' : `; margin compared up to q<sup>${xmlText(b.marginTo)}</sup>`}`));
   }
+  if (b !== undefined || v.mismatch !== undefined) rows.push(fact('route', xmlText(routeText(v))));
   return rows.length === 0 ? '' : `<dl class="facts">${rows.join('')}</dl>`;
 }
 

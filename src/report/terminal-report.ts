@@ -12,6 +12,7 @@ import { palette, type Palette, type Paint } from './palette.js';
 import { mismatchText, exponentText } from './mismatch-text.js';
 import { typeRecordText } from './type-record-text.js';
 import { terminalSafe } from './terminal-safe.js';
+import { routeText } from './route-text.js';
 
 const MARKS: Readonly<Record<VerdictKind, string>> = {
   proved: '✓ proved',
@@ -89,12 +90,6 @@ function verboseLines(v: Verdict, p: Palette): string[] {
   if (v.assumptions.length > 0) rows.push(['assumptions', v.assumptions.join(', ')]);
   rows.push(['time', `${v.seconds.toFixed(3)} s`]);
   return rows.map(([k, t]) => `${INDENT}${p.faint(k.padEnd(12))}${terminalSafe(t)}`);
-}
-
-function routeText(v: Verdict): string {
-  if (v.route === undefined) return 'exact rational arithmetic';
-  const k = v.route.primes.length;
-  return `residues modulo ${k} prime${k === 1 ? '' : 's'} with height bound 2^${v.route.heightBits} (${v.route.primes.join(', ')})`;
 }
 
 function claimLines(v: Verdict, sources: ReadonlyMap<string, string>, style: ReportStyle, p: Palette): string[] {
