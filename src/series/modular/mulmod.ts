@@ -26,6 +26,15 @@ export function powmod(base: number, e: number, p: number): number {
   return r;
 }
 
+/** 1/1, …, 1/n mod p (n < p) by inv(i) = −⌊p/i⌋·inv(p mod i), in O(n). */
+export function inverseTable(n: number, p: number): Int32Array {
+  const inv = new Int32Array(n + 1);
+  const pinv = 1 / p;
+  if (n >= 1) inv[1] = 1;
+  for (let i = 2; i <= n; i++) inv[i] = p - mulmod(Math.floor(p / i), inv[p % i]!, p, pinv);
+  return inv;
+}
+
 /** The inverse of a (≠ 0 mod p) by Fermat's little theorem. */
 export function invmod(a: number, p: number): number {
   return powmod(a, p - 2, p);

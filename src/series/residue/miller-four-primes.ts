@@ -7,7 +7,7 @@
  * the one-prime path: every product is an integer below 2^49, a chunk of them below
  * 2^52, reduced before the next chunk.
  */
-import { mulmod, powmod, invmod } from '../modular/mulmod.js';
+import { mulmod, powmod, invmod, inverseTable } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 
 export interface SharedTerms {
@@ -41,14 +41,6 @@ export function sharedTerms(data: readonly Int32Array[], primes: readonly NttPri
   return { at: Int32Array.from(at), value: Float64Array.from(value) };
 }
 
-function inverses(n: number, p: number): Float64Array {
-  const inv = new Float64Array(n + 1);
-  const pinv = 1 / p;
-  if (n >= 1) inv[1] = 1;
-  for (let i = 2; i <= n; i++) inv[i] = p - mulmod(Math.floor(p / i), inv[p % i]!, p, pinv);
-  return inv;
-}
-
 /**
  * f^k modulo four primes, f's lowest coefficient a0 (residues given per prime) and its
  * other terms shared; null when the products could exceed the exact range of doubles.
@@ -68,7 +60,7 @@ export function millerFourPrimes(terms: SharedTerms, a0: readonly number[], k: n
     B[q] = powmod(a0[q]!, kk, p);
     return invmod(a0[q]!, p);
   });
-  const inv = ps.map((p) => inverses(rows, p));
+  const inv = ps.map((p) => inverseTable(rows, p));
   const { at, value } = terms;
   const cj = Float64Array.from(at, (j, t) => (k + 1) * j * value[t]!);
   const m = at.length;

@@ -6,18 +6,9 @@
 import { type Rational, rmin, rcmp, rsub } from '../rational.js';
 import { gcdNumber, lcmNumber, toNumber } from '../integer.js';
 import { sliceCountTo } from '../qz-series.js';
-import type { NttPrime } from '../modular/ntt-primes.js';
-import { type ResidueSeries, regridResidues } from './residue-series.js';
+import { type ResidueSeries, type ResidueGrid, regridResidues } from './residue-series.js';
 
-export interface AlignedResidues {
-  readonly primes: readonly NttPrime[];
-  readonly start: Rational;
-  readonly qDen: number;
-  readonly rows: number;
-  readonly exactTo: Rational;
-  readonly zLo: number;
-  readonly zStep: number;
-  readonly width: number;
+export interface AlignedResidues extends ResidueGrid {
   /** data[s][i]: series s modulo prime i on the common grid, rows × width. */
   readonly data: readonly (readonly Int32Array[])[];
 }

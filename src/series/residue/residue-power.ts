@@ -9,22 +9,13 @@
  */
 import { type Rational, rat, rmul, radd, rsub, rmin, rcmp } from '../rational.js';
 import { sliceCountTo } from '../qz-series.js';
-import { mulmod, powmod, invmod } from '../modular/mulmod.js';
+import { mulmod, powmod, invmod, inverseTable } from '../modular/mulmod.js';
 import { nttForward, nttInverse, transformLength, pointwisePower } from '../modular/ntt.js';
 import { NTT_MAX_LOG } from '../modular/ntt-primes.js';
 import { type ResidueSeries, truncateResidues, trimColumns } from './residue-series.js';
 import { multiplyResidues, NTT_BUTTERFLY_COST } from './residue-multiply.js';
 import { inverseNewtonResidues } from './residue-inverse.js';
 import { sharedTerms, millerFourPrimes } from './miller-four-primes.js';
-
-/** 1/1, …, 1/n mod p by inv(i) = −⌊p/i⌋·inv(p mod i). */
-function inverseTable(n: number, p: number): Int32Array {
-  const inv = new Int32Array(n + 1);
-  const pinv = 1 / p;
-  if (n >= 1) inv[1] = 1;
-  for (let i = 2; i <= n; i++) inv[i] = p - mulmod(Math.floor(p / i), inv[p % i]!, p, pinv);
-  return inv;
-}
 
 function millerOnePrime(a: Int32Array, k: number, rows: number, p: number): Int32Array {
   const pinv = 1 / p;

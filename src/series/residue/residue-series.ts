@@ -14,7 +14,8 @@ import { dense } from '../slice.js';
 import { invmod, mulmod } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 
-export interface ResidueSeries {
+/** The grid of a residue series: its q-rows, its ζ-columns, its primes. */
+export interface ResidueGrid {
   readonly primes: readonly NttPrime[];
   readonly start: Rational;
   readonly qDen: number;
@@ -25,6 +26,9 @@ export interface ResidueSeries {
   /** ζ-exponent step between columns, in halves (1 when there is one column). */
   readonly zStep: number;
   readonly width: number;
+}
+
+export interface ResidueSeries extends ResidueGrid {
   /** One array per prime, rows × width, row-major. */
   readonly data: readonly Int32Array[];
 }
