@@ -111,7 +111,7 @@ function benchWorkload(w, route, quick) {
     sum: runs[0].sum,
     wsum: runs[0].wsum,
     maxRssMB: maxRssMB === null ? null : Math.round(maxRssMB),
-    ...(w.referenceMs === undefined ? {} : { referenceMs: w.referenceMs, ratio: Math.round((bestMs / w.referenceMs) * 10) / 10 }),
+    ...(w.referenceMs === undefined ? {} : { referenceMs: w.referenceMs, ratio: Math.round((bestMs / w.referenceMs) * 100) / 100 }),
   };
 }
 

@@ -48,59 +48,108 @@ function twiddles(prime: NttPrime, n: number, inverse: boolean): Twiddles {
 /** The longest transform: every table prime is c·2^NTT_MAX_LOG + 1, so longer roots of unity need not exist. */
 export const NTT_MAX_LENGTH = 2 ** NTT_MAX_LOG;
 
-/** Forward transform (decimation in frequency); the output is in bit-reversed order. */
+/** x·w mod p for residues x, w (mulmod.ts's method, branch-free). */
+function mulw(x: number, w: number, p: number, pinv: number): number {
+  const q = (x * w * pinv) | 0;
+  let r = (Math.imul(x, w) - Math.imul(q, p)) | 0;
+  r += (r >> 31) & p;
+  r -= p;
+  return r + ((r >> 31) & p);
+}
+
+function addp(x: number, y: number, p: number): number {
+  const s = x + y - p;
+  return s + ((s >> 31) & p);
+}
+
+function subp(x: number, y: number, p: number): number {
+  const d = x - y;
+  return d + ((d >> 31) & p);
+}
+
+/**
+ * Forward transform (decimation in frequency); the output is in bit-reversed order.
+ * Stages go two at a time (radix 4: each element loaded and stored once per pair),
+ * after one radix-2 stage when log₂n is odd.
+ */
 export function nttForward(a: Int32Array, prime: NttPrime): void {
   const p = prime.p | 0;
   const n = a.length;
   if (n > NTT_MAX_LENGTH) throw new RangeError(`internal: an NTT of length ${n} exceeds the primes' 2^${NTT_MAX_LOG}`);
   const { w } = twiddles(prime, n, false);
   const pinv = 1 / p;
-  for (let half = n >> 1; half >= 1; half >>= 1) {
+  let half = n >> 1;
+  if (half >= 1 && Math.log2(n) % 2 === 1) {
+    for (let k = 0; k < half; k++) {
+      const u = a[k]!;
+      const v = a[k + half]!;
+      a[k] = addp(u, v, p);
+      a[k + half] = mulw(subp(u, v, p), w[half + k]!, p, pinv);
+    }
+    half >>= 1;
+  }
+  for (; half >= 2; half >>= 2) {
+    const q = half >> 1;
     for (let i = 0; i < n; i += 2 * half) {
-      for (let k = 0; k < half; k++) {
-        const u = a[i + k]!;
-        const v = a[i + k + half]!;
-        let s = u + v - p;
-        s += (s >> 31) & p;
-        let d = u - v;
-        d += (d >> 31) & p;
-        const wk = w[half + k]!;
-        const q = (d * wk * pinv) | 0;
-        let r = (Math.imul(d, wk) - Math.imul(q, p)) | 0;
-        r += (r >> 31) & p;
-        r -= p;
-        r += (r >> 31) & p;
-        a[i + k] = s;
-        a[i + k + half] = r;
+      for (let k = 0; k < q; k++) {
+        const i0 = i + k;
+        const x0 = a[i0]!;
+        const x1 = a[i0 + q]!;
+        const x2 = a[i0 + 2 * q]!;
+        const x3 = a[i0 + 3 * q]!;
+        const y0 = addp(x0, x2, p);
+        const y2 = mulw(subp(x0, x2, p), w[half + k]!, p, pinv);
+        const y1 = addp(x1, x3, p);
+        const y3 = mulw(subp(x1, x3, p), w[half + k + q]!, p, pinv);
+        const wk = w[q + k]!;
+        a[i0] = addp(y0, y1, p);
+        a[i0 + q] = mulw(subp(y0, y1, p), wk, p, pinv);
+        a[i0 + 2 * q] = addp(y2, y3, p);
+        a[i0 + 3 * q] = mulw(subp(y2, y3, p), wk, p, pinv);
       }
     }
   }
 }
 
-/** Inverse transform (decimation in time) of a bit-reversed input, times 1/n unless `unscaled`. */
+/**
+ * Inverse transform (decimation in time) of a bit-reversed input, times 1/n unless
+ * `unscaled`; stages two at a time as in nttForward, the last one alone when log₂n is odd.
+ */
 export function nttInverse(a: Int32Array, prime: NttPrime, unscaled = false): void {
   const p = prime.p | 0;
   const n = a.length;
+  if (n > NTT_MAX_LENGTH) throw new RangeError(`internal: an NTT of length ${n} exceeds the primes' 2^${NTT_MAX_LOG}`);
   const { w } = twiddles(prime, n, true);
   const pinv = 1 / p;
-  for (let half = 1; half < n; half <<= 1) {
-    for (let i = 0; i < n; i += 2 * half) {
-      for (let k = 0; k < half; k++) {
-        const x = a[i + k + half]!;
-        const wk = w[half + k]!;
-        const q = (x * wk * pinv) | 0;
-        let v = (Math.imul(x, wk) - Math.imul(q, p)) | 0;
-        v += (v >> 31) & p;
-        v -= p;
-        v += (v >> 31) & p;
-        const u = a[i + k]!;
-        let s = u + v - p;
-        s += (s >> 31) & p;
-        let d = u - v;
-        d += (d >> 31) & p;
-        a[i + k] = s;
-        a[i + k + half] = d;
+  let q = 1;
+  for (; 4 * q <= n; q <<= 2) {
+    for (let i = 0; i < n; i += 4 * q) {
+      for (let k = 0; k < q; k++) {
+        const i0 = i + k;
+        const x0 = a[i0]!;
+        const x2 = a[i0 + 2 * q]!;
+        const t1 = mulw(a[i0 + q]!, w[q + k]!, p, pinv);
+        const t3 = mulw(a[i0 + 3 * q]!, w[q + k]!, p, pinv);
+        const y0 = addp(x0, t1, p);
+        const y1 = subp(x0, t1, p);
+        const y2 = addp(x2, t3, p);
+        const y3 = subp(x2, t3, p);
+        const t2 = mulw(y2, w[2 * q + k]!, p, pinv);
+        const t4 = mulw(y3, w[3 * q + k]!, p, pinv);
+        a[i0] = addp(y0, t2, p);
+        a[i0 + 2 * q] = subp(y0, t2, p);
+        a[i0 + q] = addp(y1, t4, p);
+        a[i0 + 3 * q] = subp(y1, t4, p);
       }
+    }
+  }
+  if (q < n) {
+    // one radix-2 stage left (log₂n odd): half = q = n/2
+    for (let k = 0; k < q; k++) {
+      const u = a[k]!;
+      const v = mulw(a[k + q]!, w[q + k]!, p, pinv);
+      a[k] = addp(u, v, p);
+      a[k + q] = subp(u, v, p);
     }
   }
   if (!unscaled) scaleInPlace(a, invmod(n % p, p), p);
