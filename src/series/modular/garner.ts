@@ -40,11 +40,14 @@ function aboveHalf(v: readonly number[], primes: readonly NttPrime[]): boolean {
   return false;
 }
 
-function assemble(v: readonly number[], big: readonly Int[]): Int {
-  let top = v.length - 1;
-  while (top > 0 && v[top] === 0) top--;
-  let acc = int(v[top]!);
-  for (let j = top - 1; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, big[j]!), int(v[j]!));
+/** Σ v_j·Π_{i<j} p_i, Horner from the top; in doubles while exact (below 2^53), then in JSBI. */
+function assemble(v: readonly number[], primes: readonly NttPrime[], big: readonly Int[]): Int {
+  let j = v.length - 1;
+  while (j > 0 && v[j] === 0) j--;
+  let small = v[j]!;
+  for (j--; j >= 0 && small <= (2 ** 53 - primes[j]!.p) / primes[j]!.p; j--) small = small * primes[j]!.p + v[j]!;
+  let acc = int(small);
+  for (; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, big[j]!), int(v[j]!));
   return acc;
 }
 
@@ -72,7 +75,7 @@ export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], l
       continue;
     }
     if (!aboveHalf(v, primes)) {
-      out[n] = assemble(v, big);
+      out[n] = assemble(v, primes, big);
       continue;
     }
     // M − x = (M − 1 − x) + 1: complement the digits, then add one with carries
@@ -86,7 +89,7 @@ export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], l
       }
       v[j] = d;
     }
-    out[n] = JSBI.unaryMinus(assemble(v, big));
+    out[n] = JSBI.unaryMinus(assemble(v, primes, big));
   }
   return out;
 }
