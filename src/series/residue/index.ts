@@ -5,6 +5,7 @@ export * from './residue-multiply.js';
 export * from './residue-power.js';
 export * from './residue-inverse.js';
 export * from './miller-four-primes.js';
+export * from './shared-integers.js';
 export * from './residue-combine.js';
 export * from './residue-align.js';
 export * from './series-of-residues.js';

@@ -8,6 +8,9 @@
  *   when the accumulated load could reach 2^53;
  * - per ζ-column: a q-only dense factor is transformed once and each column of the
  *   other is multiplied by it;
+ * - integers: when both factors are the same small integers modulo every prime and
+ *   their product stays below 2^52, the sparse path once, in plain doubles, for all
+ *   primes (shared-integers.ts);
  * - Kronecker substitution: rows packed with stride W (the product's width), one NTT
  *   product per prime — per pair of row blocks when the packed product would be longer
  *   than the primes' largest transform (2^20).
@@ -19,7 +22,8 @@ import { mulmod } from '../modular/mulmod.js';
 import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength, NTT_MAX_LENGTH } from '../modular/ntt.js';
 import { invmod } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
-import { type ResidueSeries, regridResidues, trimColumns } from './residue-series.js';
+import { type ResidueSeries, type ResidueGrid, regridResidues, trimColumns } from './residue-series.js';
+import { sharedIntegers, maxAbs, sumAbs, sparseDenseIntegers, integersModulo } from './shared-integers.js';
 
 /**
  * Cost of one NTT butterfly (with its share of the pointwise products) against one
@@ -213,10 +217,10 @@ function log2ceil(n: number): number {
   return Math.max(1, Math.ceil(Math.log2(Math.max(2, n))));
 }
 
-export type ResidueProductRoute = 'sparse-a' | 'sparse-b' | 'column-a' | 'column-b' | 'kronecker';
+export type ResidueProductRoute = 'sparse-a' | 'sparse-b' | 'column-a' | 'column-b' | 'kronecker' | 'integers-a' | 'integers-b';
 type Route = ResidueProductRoute;
 
-function chooseRoute(al: Aligned): Route {
+function chooseRoute(al: Aligned, ints: IntegerOperands | null): Route {
   const { a, b, rows, width } = al;
   const ra = Math.min(rows, a.rows);
   const rb = Math.min(rows, b.rows);
@@ -233,8 +237,28 @@ function chooseRoute(al: Aligned): Route {
     if (b.width === 1) costs.push(['column-a', NTT_BUTTERFLY_COST * (a.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
     if (a.width === 1) costs.push(['column-b', NTT_BUTTERFLY_COST * (b.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
   }
+  // the routes above run once per prime, the integer routes once for all
+  for (const c of costs) c[1] *= a.primes.length;
+  if (ints !== null) {
+    costs.push(['integers-a', sparseWork(a.data[0]!, a.width, rb, b.width, rows)]);
+    costs.push(['integers-b', sparseWork(b.data[0]!, b.width, ra, a.width, rows)]);
+  }
   costs.sort((x, y) => x[1] - y[1]);
   return costs[0]![0];
+}
+
+/** Both factors as shared integers whose product stays exact in doubles, or null (shared-integers.ts). */
+interface IntegerOperands {
+  readonly a: Float64Array;
+  readonly b: Float64Array;
+}
+
+function integerOperands(al: Aligned): IntegerOperands | null {
+  const a = sharedIntegers(al.a.data, al.a.primes);
+  if (a === null) return null;
+  const b = sharedIntegers(al.b.data, al.b.primes);
+  if (b === null || maxAbs(a) * sumAbs(b) >= 2 ** 52 || maxAbs(b) * sumAbs(a) >= 2 ** 52) return null;
+  return { a, b };
 }
 
 /** a·b to q-order X (or less, where a factor is not known far enough). */
@@ -249,9 +273,18 @@ export function multiplyResidues(x: ResidueSeries, y: ResidueSeries, X: Rational
 export function multiplyResiduesBy(forced: ResidueProductRoute | null, x: ResidueSeries, y: ResidueSeries, X: Rational): ResidueSeries {
   const al = align(x, y, X);
   const { a, b, rows, width } = al;
-  const route = forced ?? chooseRoute(al);
+  const ints = forced === null || forced === 'integers-a' || forced === 'integers-b' ? integerOperands(al) : null;
+  const route = forced ?? chooseRoute(al, ints);
   if ((route === 'column-a' && b.width !== 1) || (route === 'column-b' && a.width !== 1)) {
     throw new RangeError('internal: a column product needs a q-only factor');
+  }
+  if (route === 'integers-a' || route === 'integers-b') {
+    if (ints === null) throw new RangeError('internal: the integer route needs shared small integers');
+    const acc =
+      route === 'integers-a'
+        ? sparseDenseIntegers(ints.a, a.width, ints.b, b.width, rows, width)
+        : sparseDenseIntegers(ints.b, b.width, ints.a, a.width, rows, width);
+    return trimColumns({ ...grid(al), data: a.primes.map((pr) => integersModulo(acc, pr.p)) });
   }
   const data = a.primes.map((prime, i) => {
     const da = a.data[i]!;
@@ -269,15 +302,9 @@ export function multiplyResiduesBy(forced: ResidueProductRoute | null, x: Residu
         return kronecker(da, a.width, db, b.width, rows, width, prime);
     }
   });
-  return trimColumns({
-    primes: a.primes,
-    start: al.start,
-    qDen: al.qDen,
-    rows,
-    exactTo: al.exactTo,
-    zLo: a.zLo + b.zLo,
-    zStep: al.zStep,
-    width,
-    data,
-  });
+  return trimColumns({ ...grid(al), data });
+}
+
+function grid(al: Aligned): ResidueGrid {
+  return { primes: al.a.primes, start: al.start, qDen: al.qDen, rows: al.rows, exactTo: al.exactTo, zLo: al.a.zLo + al.b.zLo, zStep: al.zStep, width: al.width };
 }

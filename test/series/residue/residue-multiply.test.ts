@@ -29,6 +29,9 @@ import {
   makeSeries,
   trimSlice,
   type Slice,
+  sharedIntegers,
+  maxAbs,
+  sumAbs,
 } from '../../../src/series/index.js';
 import {
   seriesArb,
@@ -52,6 +55,10 @@ function routesFor(ra: ResidueSeries, rb: ResidueSeries): (ResidueProductRoute |
   const routes: (ResidueProductRoute | null)[] = ['sparse-a', 'sparse-b', 'kronecker', null];
   if (rb.width === 1) routes.push('column-a');
   if (ra.width === 1) routes.push('column-b');
+  // the integer routes when both are the same small integers modulo every prime
+  const ua = sharedIntegers(ra.data, ra.primes);
+  const ub = sharedIntegers(rb.data, rb.primes);
+  if (ua !== null && ub !== null && maxAbs(ua) * sumAbs(ub) < 2 ** 52 && maxAbs(ub) * sumAbs(ua) < 2 ** 52) routes.push('integers-a', 'integers-b');
   return routes;
 }
 
