@@ -26,6 +26,16 @@ export function powmod(base: number, e: number, p: number): number {
   return r;
 }
 
+/**
+ * x mod p in [0, p) for an integer |x| < 2^53 held in a double: ⌊x/p⌋ in floating
+ * point is off by at most one and x − q·p is exact, so one correction either way
+ * suffices (much cheaper than the floating-point remainder `%`).
+ */
+export function reduceDouble(x: number, p: number, pinv: number): number {
+  const v = x - Math.floor(x * pinv) * p;
+  return v < 0 ? v + p : v >= p ? v - p : v;
+}
+
 /** 1/1, …, 1/n mod p (n < p) by inv(i) = −⌊p/i⌋·inv(p mod i), in O(n). */
 export function inverseTable(n: number, p: number): Int32Array {
   const inv = new Int32Array(n + 1);

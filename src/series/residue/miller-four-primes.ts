@@ -7,7 +7,7 @@
  * the one-prime path: every product is an integer below 2^49, a chunk of them below
  * 2^52, reduced before the next chunk.
  */
-import { mulmod, powmod, invmod, inverseTable } from '../modular/mulmod.js';
+import { mulmod, powmod, invmod, inverseTable, reduceDouble } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 
 export interface SharedTerms {
@@ -54,6 +54,7 @@ export function millerFourPrimes(terms: SharedTerms, a0: readonly number[], k: n
   const chunk = Math.floor(2 ** 52 / (Math.max(1, sMax) * pmax));
   if (chunk < 1) return null;
   const ps = [p0, p1, p2, p3];
+  const [i0, i1, i2, i3] = [1 / p0, 1 / p1, 1 / p2, 1 / p3];
   const B = new Float64Array(rows * 4);
   const scale = ps.map((p, q) => {
     const kk = k >= 0 ? k % (p - 1) : (k % (p - 1)) + (p - 1);
@@ -81,10 +82,10 @@ export function millerFourPrimes(terms: SharedTerms, a0: readonly number[], k: n
         s2 += c * B[base + 2]!;
         s3 += c * B[base + 3]!;
       }
-      s0 %= p0;
-      s1 %= p1;
-      s2 %= p2;
-      s3 %= p3;
+      s0 = reduceDouble(s0, p0, i0);
+      s1 = reduceDouble(s1, p1, i1);
+      s2 = reduceDouble(s2, p2, i2);
+      s3 = reduceDouble(s3, p3, i3);
     }
     const sums = [s0, s1, s2, s3];
     for (let q = 0; q < 4; q++) {

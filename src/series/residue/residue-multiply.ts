@@ -18,9 +18,8 @@
 import { type Rational, radd, rmin } from '../rational.js';
 import { gcdNumber, lcmNumber } from '../integer.js';
 import { sliceCountTo } from '../qz-series.js';
-import { mulmod } from '../modular/mulmod.js';
 import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength, NTT_MAX_LENGTH } from '../modular/ntt.js';
-import { invmod } from '../modular/mulmod.js';
+import { mulmod, invmod, reduceDouble } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 import { type ResidueSeries, type ResidueGrid, regridResidues, trimColumns } from './residue-series.js';
 import { sharedIntegers, maxAbs, sumAbs, sparseDenseIntegers, integersModulo } from './shared-integers.js';
@@ -118,7 +117,7 @@ function sparseDense(s: Int32Array, sw: number, d: Int32Array, dw: number, rows:
       const small = sym < SMALL_MULTIPLIER && sym > -SMALL_MULTIPLIER;
       const weight = small ? Math.abs(sym) : 1;
       if (load + weight > limit) {
-        for (let t = 0; t < acc.length; t++) acc[t] = acc[t]! % p;
+        for (let t = 0; t < acc.length; t++) acc[t] = reduceDouble(acc[t]!, p, pinv);
         load = 1;
       }
       load += weight;
@@ -140,9 +139,7 @@ function sparseDense(s: Int32Array, sw: number, d: Int32Array, dw: number, rows:
   }
   const out = new Int32Array(rows * W);
   for (let t = 0; t < out.length; t++) {
-    let v = acc[t]! % p;
-    if (v < 0) v += p;
-    out[t] = v;
+    out[t] = reduceDouble(acc[t]!, p, pinv);
   }
   return out;
 }

@@ -9,7 +9,7 @@
  */
 import { type Rational, rat, rmul, radd, rsub, rmin, rcmp } from '../rational.js';
 import { sliceCountTo } from '../qz-series.js';
-import { mulmod, powmod, invmod, inverseTable } from '../modular/mulmod.js';
+import { mulmod, powmod, invmod, inverseTable, reduceDouble } from '../modular/mulmod.js';
 import { nttForward, nttInverse, transformLength, pointwisePower } from '../modular/ntt.js';
 import { NTT_MAX_LOG } from '../modular/ntt-primes.js';
 import { type ResidueSeries, truncateResidues, trimColumns } from './residue-series.js';
@@ -62,7 +62,7 @@ function millerOnePrime(a: Int32Array, k: number, rows: number, p: number): Int3
           a2 += (cj[t + 1]! - n * sy[t + 1]!) * b[n - at[t + 1]!]!;
         }
         if (t < end) a1 += (cj[t]! - n * sy[t]!) * b[n - at[t]!]!;
-        acc = (acc + a1 + a2) % p;
+        acc = reduceDouble(acc + a1 + a2, p, pinv);
       }
       if (acc < 0) acc += p;
     } else {

@@ -6,6 +6,8 @@
  * prime. If it stays below 2^52 it is exact in doubles, so one pass gives the residues
  * for all primes (theta products have small integer coefficients all along).
  */
+import { reduceDouble } from '../modular/mulmod.js';
+
 export function sharedIntegers(data: readonly Int32Array[], primes: readonly { readonly p: number }[]): Float64Array | null {
   const first = data[0]!;
   const p0 = primes[0]!.p;
@@ -77,10 +79,10 @@ export function sparseDenseIntegers(s: Float64Array, sw: number, d: Float64Array
 /** The residues of integers below 2^53 modulo p, in [0, p). */
 export function integersModulo(acc: Float64Array, p: number): Int32Array {
   const out = new Int32Array(acc.length);
+  const pinv = 1 / p;
   for (let t = 0; t < acc.length; t++) {
-    let v = acc[t]! % p;
-    if (v < 0) v += p;
-    out[t] = v;
+    const x = acc[t]!;
+    if (x !== 0) out[t] = reduceDouble(x, p, pinv);
   }
   return out;
 }
