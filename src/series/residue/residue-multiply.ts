@@ -22,7 +22,7 @@ import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength
 import { mulmod, invmod, reduceDouble } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 import { type ResidueSeries, type ResidueGrid, regridResidues, trimColumns } from './residue-series.js';
-import { sharedIntegers, maxAbs, sumAbs, sparseDenseIntegers, integersModulo } from './shared-integers.js';
+import { sharedIntegers, maxAbs, sumAbs, sparseDenseIntegers, integersModulo, nonZeroColumns } from './shared-integers.js';
 
 /**
  * Cost of one NTT butterfly (with its share of the pointwise products) against one
@@ -97,17 +97,8 @@ function sparseDense(s: Int32Array, sw: number, d: Int32Array, dw: number, rows:
   const dRows = Math.min(rows, d.length / dw);
   let load = 0;
   const limit = 2 ** 52 / p;
-  // the non-zero columns of each row of d, [lo, hi): products skip the zeros around them
-  const lo = new Int32Array(dRows);
-  const hi = new Int32Array(dRows);
-  for (let r = 0; r < dRows; r++) {
-    let a = 0;
-    let b = dw;
-    while (a < b && d[r * dw + a] === 0) a++;
-    while (b > a && d[r * dw + b - 1] === 0) b--;
-    lo[r] = a;
-    hi[r] = b;
-  }
+  // products skip the zeros around each row of d
+  const { lo, hi } = nonZeroColumns(d, dRows, dw);
   for (let i = 0; i < sRows; i++) {
     const rowsLeft = Math.min(dRows, rows - i);
     for (let j = 0; j < sw; j++) {

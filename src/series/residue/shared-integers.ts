@@ -41,6 +41,21 @@ export function sumAbs(u: Float64Array): number {
   return s;
 }
 
+/** Per row of a rows × width grid, the columns [lo, hi) outside which it is zero. */
+export function nonZeroColumns(d: ArrayLike<number>, rows: number, width: number): { readonly lo: Int32Array; readonly hi: Int32Array } {
+  const lo = new Int32Array(rows);
+  const hi = new Int32Array(rows);
+  for (let r = 0; r < rows; r++) {
+    let a = 0;
+    let b = width;
+    while (a < b && d[r * width + a] === 0) a++;
+    while (b > a && d[r * width + b - 1] === 0) b--;
+    lo[r] = a;
+    hi[r] = b;
+  }
+  return { lo, hi };
+}
+
 /**
  * The integer product of s (rows × sw) and d (rows × dw) on rows × W, truncated to
  * `rows`; the caller guarantees max|s|·Σ|d| < 2^52, so every sum is exact.
@@ -49,17 +64,7 @@ export function sparseDenseIntegers(s: Float64Array, sw: number, d: Float64Array
   const acc = new Float64Array(rows * W);
   const sRows = Math.min(rows, s.length / sw);
   const dRows = Math.min(rows, d.length / dw);
-  // the non-zero columns of each row of d, [lo, hi)
-  const lo = new Int32Array(dRows);
-  const hi = new Int32Array(dRows);
-  for (let r = 0; r < dRows; r++) {
-    let a = 0;
-    let b = dw;
-    while (a < b && d[r * dw + a] === 0) a++;
-    while (b > a && d[r * dw + b - 1] === 0) b--;
-    lo[r] = a;
-    hi[r] = b;
-  }
+  const { lo, hi } = nonZeroColumns(d, dRows, dw);
   for (let i = 0; i < sRows; i++) {
     const rowsLeft = Math.min(dRows, rows - i);
     for (let j = 0; j < sw; j++) {
