@@ -18,6 +18,7 @@ import { compareTo, type Comparison, type Mismatch } from './compare-series.js';
 import { modularSides, compareResiduesTo } from './compare-residues.js';
 import { isIdenticallyZero } from './side-zero.js';
 import { boundFor } from './bound-of-type.js';
+import { MODULAR_MIN_TERMS, MODULAR_MAX_PRIMES } from './route-choice.js';
 import { estimateTermsForType } from './estimate.js';
 import { zetaNormFor } from './zeta-norm.js';
 import type { CheckOptions } from './check-options.js';
@@ -88,16 +89,6 @@ function worstClass(a: FormClass, b: FormClass): FormClass {
   return a === 'meromorphic' || b === 'meromorphic' ? 'meromorphic' : 'modular';
 }
 
-/**
- * When `auto` takes the modular route: at least MODULAR_MIN_TERMS coefficients in the
- * bound and at most MODULAR_MAX_PRIMES primes for the height. Measured on the family
- * E_4^a·φ_{−2,1}^b == E_4^a·ϑ(z)^{2b}/η^{6b} (2 cores, Node 20): below ~100 coefficients
- * both routes take a few ms; the modular route is about twice as fast up to ~15 primes,
- * even at 27, and slower at 49, where one global height makes every intermediate product
- * use all the primes while the exact engine sizes each product's primes to its own height.
- */
-export const MODULAR_MIN_TERMS = 200;
-export const MODULAR_MAX_PRIMES = 20;
 
 /** Both sides of F expanded to one q-order, compared at any order up to it. */
 interface ExpandedSides {

@@ -20,6 +20,7 @@ import { isZeroMonomial, monomialText, ONE_MONOMIAL, multiplyMonomials, powerMon
 import { splitMonomial, monomialType, monomialClass, quasiReasons } from './monomial-parts.js';
 import { numeratorSource } from './monomial-source.js';
 import { estimateTermsForType } from './estimate.js';
+import { expandByRoute } from './route-choice.js';
 import { zetaNormFor } from './zeta-norm.js';
 import type { ZetaNorm } from './compare-series.js';
 import { evalCodes } from './diagnostic-codes.js';
@@ -61,15 +62,16 @@ export function expandMonomial(m: Monomial, nvars: number, to: Rational | null, 
   }
   const src = numeratorSource(N);
   const numeratorType = monomialType(N, nvars) ?? constantType(nvars);
-  const guard = (X: Rational): void => {
+  const guard = (X: Rational): number => {
     const estimate = estimateTermsForType(numeratorType, src.valuation, X);
     if (estimate > maxTerms) {
       throw evalError(evalCodes.tooManyTerms, { estimate: Math.ceil(estimate).toExponential(2), limit: maxTerms }, span);
     }
+    return estimate;
   };
   if (to !== null) {
-    guard(to);
-    return { ...base, series: truncateSeries(src.expand(to), to), qOrder: to };
+    const estimate = guard(to);
+    return { ...base, series: truncateSeries(expandByRoute(src, to, nvars, estimate), to), qOrder: to };
   }
   let X = radd(src.valuation, rat(DEFAULT_STEPS_PAST_LEADING));
   guard(X);

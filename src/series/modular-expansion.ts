@@ -25,21 +25,24 @@ export interface ModularResidues {
   readonly route: ModularRoute;
 }
 
-/** The residues of s to X with enough primes for its own height; null if the table is too short. */
-export function modularResidues(s: SeriesSource, X: Rational): ModularResidues | null {
+/**
+ * The residues of s to X with enough primes for its own height; null if the table is
+ * too short or more than `maxPrimes` would be needed.
+ */
+export function modularResidues(s: SeriesSource, X: Rational, maxPrimes = Infinity): ModularResidues | null {
   const view = modularOf(s);
   const majorant = view.majorant(X, majorantBlockLength(X, s.valuation));
   const bits = heightBits(majorant);
   const choice = choosePrimes(bits, majorant.avoid);
-  if (choice === null) return null;
+  if (choice === null || choice.primes.length > maxPrimes) return null;
   const residues = view.residues(X, choice.primes);
   if (rcmp(residues.exactTo, X) < 0) throw new RangeError('internal: residues short of the q-order asked');
   return { residues, majorant, route: { primes: choice.primes.map((p) => p.p), heightBits: bits } };
 }
 
 /** s to q-order X through residues and CRT; null when the prime table is too short. */
-export function expandModular(s: SeriesSource, X: Rational): { series: QZSeries; route: ModularRoute } | null {
-  const m = modularResidues(s, X);
+export function expandModular(s: SeriesSource, X: Rational, maxPrimes = Infinity): { series: QZSeries; route: ModularRoute } | null {
+  const m = modularResidues(s, X, maxPrimes);
   if (m === null) return null;
   return { series: seriesOfResidues(m.residues, m.majorant.den), route: m.route };
 }

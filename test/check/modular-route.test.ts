@@ -27,7 +27,8 @@ import type { Certificate, Verdict } from '../../src/verdict/index.js';
 import { checkText, checkOne } from '../helpers/check.js';
 import { parseExpression } from '../../src/lang/index.js';
 import { newEvalContext, evaluate, expandMonomial } from '../../src/check/index.js';
-import type { QZSeries } from '../../src/series/index.js';
+import { type QZSeries, isZeroSeries, subtractSeries } from '../../src/series/index.js';
+import { numeratorSource } from '../../src/check/monomial-source.js';
 
 function sideSeries(text: string, X: Rational): QZSeries {
   const p = parseExpression(text, ['z']);
@@ -90,6 +91,18 @@ describe('the modular route agrees with the exact engine', () => {
     expect(small.route).toBeUndefined();
     expect(large.verdict).toBe('proved');
     expect(large.route?.primes.length).toBeGreaterThan(1);
+  });
+});
+
+describe('expand takes the modular route for large orders', () => {
+  it('E_4^30·φ_{−2,1}^20 to q^10 equals the exact engine', () => {
+    const text = 'E_4^30 * phi_{-2,1}^20';
+    const p = parseExpression(text, ['z']);
+    const m = evaluate(p.expr!, newEvalContext(text, ['z']));
+    const viaExpand = expandMonomial(m, 1, rat(10), 1e8, null).series;
+    const exact = numeratorSource(m).expand(rat(10));
+    expect(isZeroSeries(subtractSeries(viaExpand, exact))).toBe(true);
+    expect(viaExpand.exactTo).toEqual(rat(10));
   });
 });
 
