@@ -1,15 +1,15 @@
 /**
  * η^e on the modular route (MATH.md §8). Residues: Euler's pentagonal series
  * Π(1 − qⁿ) = Σ_k (−1)^k q^{k(3k−1)/2} raised to e by Miller's recurrence, negative e
- * included. Majorants, for the cumulative sums C(N) of |coefficients| of Π(1 − qⁿ)^e
- * through q^N:
- * - e > 0: Π(1−qⁿ)^e = (Π(1−qⁿ)³)^⌊e/3⌋·Π(1−qⁿ)^(e mod 3), and Jacobi's identity
- *   Π(1−qⁿ)³ = Σ_{k≥0} (−1)^k (2k+1) q^{k(k+1)/2} gives C = (K+1)², K the largest k with
- *   k(k+1)/2 ≤ N; the pentagonal series gives C = #{k : k(3k−1)/2 ≤ N};
- * - e < 0: the coefficients are non-negative, so for every 0 < x < 1,
- *   C(N) ≤ Σ_n a_n x^(n−N) = x^(−N) Π_m (1 − x^m)^(−|e|) (Rankin's trick), evaluated at
- *   the saddle point x = exp(−π√(|e|/6(N+1))), with the tail of Σ −log(1 − x^m) bounded
- *   by x^(M+1)/((1 − x)(1 − x^(M+1))).
+ * included. Majorants (per block, see series/residue/majorant.ts):
+ * - e > 0: η^e = (η³)^⌊e/3⌋·η^(e mod 3), the product rule applied to the exact block
+ *   sums of Jacobi's η³ = Σ_{k≥0} (−1)^k (2k+1) q^{1/8 + k(k+1)/2} and of Euler's series;
+ * - e < 0: the coefficients of Π(1 − qⁿ)^e are non-negative, so they are their own
+ *   majorant: computed in doubles where that is cheap (inverseEtaBlocks); otherwise the
+ *   cumulative sums are bounded by Rankin's trick, for every 0 < x < 1
+ *   C(N) ≤ Σ_n a_n x^(n−N) = x^(−N) Π_m (1 − x^m)^(−|e|), evaluated at the saddle point
+ *   x = exp(−π√(|e|/6(N+1))), with the tail of Σ −log(1 − x^m) bounded by
+ *   x^(M+1)/((1 − x)(1 − x^(M+1))).
  */
 import {
   type Rational,

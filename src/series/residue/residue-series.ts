@@ -114,15 +114,6 @@ export function regridResidues(r: ResidueSeries, qDen: number, zStep: number, zL
   return { ...r, qDen, rows, zStep, zLo, width, data };
 }
 
-/** Number of non-zero grid entries (for the first prime; a cost estimate only). */
-export function nonZeroCount(r: ResidueSeries): number {
-  const a = r.data[0];
-  if (a === undefined) return 0;
-  let n = 0;
-  for (let i = 0; i < a.length; i++) if (a[i] !== 0) n++;
-  return n;
-}
-
 /**
  * The same series on the narrowest grid: columns that are zero in every row and modulo
  * every prime are dropped at both ends (a product's rectangle is the sum of its factors'
