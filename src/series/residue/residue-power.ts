@@ -4,8 +4,10 @@
  * integer k, negative included — for g = f^k with f = Σ a_j t^j, a_0 invertible:
  *   b_0 = a_0^k,  b_n = (n·a_0)⁻¹ Σ_{j=1..n} ((k+1)·j − n)·a_j·b_{n−j},
  * which needs n invertible mod p: the row count stays far below every prime. A sparse
- * base (η by Euler's pentagonal theorem) makes it O(terms·N). Everything else is
- * repeated squaring, truncated to the rows asked for.
+ * base (η by Euler's pentagonal theorem) makes it O(terms·N). The other routes — a
+ * power taken pointwise after one transform, k − 1 sparse products, squaring, Newton's
+ * inverse for negative k — are chosen by operation count (choosePowerRoute), each
+ * truncated to the rows asked for.
  */
 import { type Rational, rat, rmul, radd, rsub, rmin, rcmp } from '../rational.js';
 import { sliceCountTo } from '../qz-series.js';
@@ -179,11 +181,9 @@ export function powerRepeatedResidues(f: ResidueSeries, k: number, X: Rational):
   return truncateIfPast(result, X);
 }
 
+/** Multiply-adds of Miller's recurrence on a one-column base: its terms times the rows. */
 function millerWork(f: ResidueSeries, rows: number): number {
-  const a = f.data[0]!;
-  let terms = 0;
-  for (let i = 0; i < Math.min(a.length, rows); i++) if (a[i] !== 0) terms++;
-  return terms * rows;
+  return nonZeroEntries(f, rows) * rows;
 }
 
 /**
