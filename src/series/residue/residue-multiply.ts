@@ -212,9 +212,12 @@ function chooseRoute(al: Aligned, ints: IntegerOperands | null): Route {
   const { a, b, rows, width } = al;
   const ra = Math.min(rows, a.rows);
   const rb = Math.min(rows, b.rows);
+  // the sparse path's work, per prime or once for all (integer route)
+  const workA = sparseWork(a.data[0]!, a.width, rb, b.width, rows);
+  const workB = sparseWork(b.data[0]!, b.width, ra, a.width, rows);
   const costs: [Route, number][] = [
-    ['sparse-a', sparseWork(a.data[0]!, a.width, rb, b.width, rows)],
-    ['sparse-b', sparseWork(b.data[0]!, b.width, ra, a.width, rows)],
+    ['sparse-a', workA],
+    ['sparse-b', workB],
   ];
   // transforms longer than NTT_MAX_LENGTH have no roots of unity modulo the table's primes
   const nk = 2 ** log2ceil((ra + rb) * width);
@@ -228,8 +231,8 @@ function chooseRoute(al: Aligned, ints: IntegerOperands | null): Route {
   // the routes above run once per prime, the integer routes once for all
   for (const c of costs) c[1] *= a.primes.length;
   if (ints !== null) {
-    costs.push(['integers-a', sparseWork(a.data[0]!, a.width, rb, b.width, rows)]);
-    costs.push(['integers-b', sparseWork(b.data[0]!, b.width, ra, a.width, rows)]);
+    costs.push(['integers-a', workA]);
+    costs.push(['integers-b', workB]);
   }
   costs.sort((x, y) => x[1] - y[1]);
   return costs[0]![0];
