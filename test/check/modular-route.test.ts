@@ -27,8 +27,11 @@ import type { Certificate, Verdict } from '../../src/verdict/index.js';
 import { checkText, checkOne } from '../helpers/check.js';
 import { parseExpression } from '../../src/lang/index.js';
 import { newEvalContext, evaluate, expandMonomial } from '../../src/check/index.js';
-import { type QZSeries, isZeroSeries, subtractSeries } from '../../src/series/index.js';
+import { type QZSeries, isZeroSeries, subtractSeries, expandModular } from '../../src/series/index.js';
 import { numeratorSource } from '../../src/check/monomial-source.js';
+import { monomialType } from '../../src/check/monomial-parts.js';
+import { estimateTermsForType } from '../../src/check/estimate.js';
+import { MODULAR_MIN_TERMS, MODULAR_MAX_PRIMES } from '../../src/check/route-choice.js';
 
 function sideSeries(text: string, X: Rational): QZSeries {
   const p = parseExpression(text, ['z']);
@@ -99,6 +102,10 @@ describe('expand takes the modular route for large orders', () => {
     const text = 'E_4^30 * phi_{-2,1}^20';
     const p = parseExpression(text, ['z']);
     const m = evaluate(p.expr!, newEvalContext(text, ['z']));
+    // the route's conditions hold here, so expand goes through residues (route-choice.ts)
+    const src = numeratorSource(m);
+    expect(estimateTermsForType(monomialType(m, 1)!, src.valuation, rat(10))).toBeGreaterThanOrEqual(MODULAR_MIN_TERMS);
+    expect(expandModular(src, rat(10), MODULAR_MAX_PRIMES)).not.toBeNull();
     const viaExpand = expandMonomial(m, 1, rat(10), 1e8, null).series;
     const exact = numeratorSource(m).expand(rat(10));
     expect(isZeroSeries(subtractSeries(viaExpand, exact))).toBe(true);
