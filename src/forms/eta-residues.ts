@@ -36,6 +36,10 @@ import {
   majorantPower,
   majorantProduct,
   radd,
+  type IntegerGrid,
+  multiplyIntegers,
+  sumAbs,
+  EXACT_LIMIT,
 } from '../series/index.js';
 
 function pentagonalResidues(rows: number, primes: readonly NttPrime[]): ResidueSeries {
@@ -147,6 +151,50 @@ function etaMajorant(e: number, X: Rational, h: number): Majorant {
   return majorantProduct(parts, X);
 }
 
+/**
+ * Jacobi's cube Π(1 − qⁿ)³ = Σ_{k≥0} (−1)^k (2k+1) q^{k(k+1)/2} or Euler's Π(1 − qⁿ) =
+ * Σ_k (−1)^k q^{k(3k−1)/2}, to N q-steps, in doubles (integers far below 2^52).
+ */
+function sparseUnit(cube: boolean, N: number): Float64Array {
+  const u = new Float64Array(N + 1);
+  if (cube) for (let k = 0; (k * (k + 1)) / 2 <= N; k++) u[(k * (k + 1)) / 2] = k % 2 === 0 ? 2 * k + 1 : -(2 * k + 1);
+  else {
+    u[0] = 1;
+    for (let k = 1; (k * (3 * k - 1)) / 2 <= N; k++) {
+      const s = k % 2 === 0 ? 1 : -1;
+      u[(k * (3 * k - 1)) / 2] = s;
+      if ((k * (3 * k + 1)) / 2 <= N) u[(k * (3 * k + 1)) / 2] = s;
+    }
+  }
+  return u;
+}
+
+/** Π(1 − qⁿ)^a (a > 0) as sparse units: ⌊a/3⌋ cubes and (a mod 3) of Euler's series. */
+function etaUnits(a: number, N: number): Float64Array[] {
+  const units: Float64Array[] = [];
+  for (let i = 0; i < Math.floor(a / 3); i++) units.push(sparseUnit(true, N));
+  for (let i = 0; i < a % 3; i++) units.push(sparseUnit(false, N));
+  return units;
+}
+
+/** η^e for e ≥ 0 as exact integers to X, from its sparse units; null past EXACT_LIMIT. */
+function etaIntegers(e: number, X: Rational): IntegerGrid | null {
+  const v = rat(e, 24);
+  const N = toNumber(rfloor(rsub(X, v)));
+  const units = etaUnits(e, N);
+  // Π Σ|u| bounds every coefficient on the way: refuse before any work when it is too high
+  let bound = 1;
+  for (const u of units) bound *= sumAbs(u);
+  if (bound >= EXACT_LIMIT) return null;
+  let acc: IntegerGrid | null = units.length > 0 ? null : { start: rat(0), qDen: 1, rows: N + 1, exactTo: rat(N), zLo: 0, zStep: 1, width: 1, data: Float64Array.from({ length: N + 1 }, (_, n) => (n === 0 ? 1 : 0)) };
+  for (const u of units) {
+    const g: IntegerGrid = { start: rat(0), qDen: 1, rows: N + 1, exactTo: rat(N), zLo: 0, zStep: 1, width: 1, data: u };
+    acc = acc === null ? g : multiplyIntegers(acc, g, rat(N));
+    if (acc === null) return null;
+  }
+  return { ...acc!, start: v, exactTo: X };
+}
+
 /** η^e's modular view; valuation e/24. */
 export function etaPowerView(e: number): ModularView {
   const v = rat(e, 24);
@@ -163,5 +211,8 @@ export function etaPowerView(e: number): ModularView {
       return { ...r, start: v, exactTo: X };
     },
     power: (k) => etaPowerView(e * k),
+    ...(e >= 0 ? { integers: (X: Rational) => (rcmp(X, v) < 0 ? null : etaIntegers(e, X)) } : {}),
+    // η^e = q^(e/24)/Π(1 − qⁿ)^(−e): its reciprocal's units
+    ...(e < 0 ? { reciprocal: (X: Rational) => (rcmp(X, v) < 0 ? null : etaUnits(-e, toNumber(rfloor(rsub(X, v))))) } : {}),
   });
 }

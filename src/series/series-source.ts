@@ -16,7 +16,10 @@ import { powerSeries } from './power.js';
 import { linearCombination } from './add.js';
 import { divideExact } from './divide-exact.js';
 import { substituteLinear } from './substitute.js';
-import { type ModularView, exactView, cachedView } from './residue/modular-view.js';
+import { type ModularView, exactView, cachedView, lastOrder } from './residue/modular-view.js';
+import { majorantOfIntegers, residuesOfIntegers } from './residue/integer-grid.js';
+import { powerIntegers } from './residue/integer-multiply.js';
+import { integerProductPossible, productIntegers } from './residue/integer-product.js';
 import { majorantProduct, majorantPower, majorantSum, zeroMajorant } from './residue/majorant.js';
 import { zeroResidues } from './residue/residue-series.js';
 import { multiplyResidues } from './residue/residue-multiply.js';
@@ -77,27 +80,42 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
       }
       return truncateSeries(acc!, X);
     },
-    modular: {
-      majorant(X, h) {
-        if (rcmp(X, v) < 0) return zeroMajorant(h);
-        return majorantProduct(
-          factors.map((f) => ({ majorant: modularOf(f).majorant(radd(X, rsub(f.valuation, v)), h), valuation: f.valuation })),
-          X,
-        );
-      },
-      residues(X, primes) {
-        if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
-        let acc: ResidueSeries | null = null;
-        let rest = v;
-        for (const f of factors) {
-          const part = modularOf(f).residues(radd(X, rsub(f.valuation, v)), primes);
-          rest = rsub(rest, f.valuation);
-          // the partial product is needed to X − (valuation of the factors still to come)
-          acc = acc === null ? part : multiplyResidues(acc, part, rsub(X, rest));
-        }
-        return acc!;
-      },
+    modular: productView(factors, v),
+  };
+}
+
+/**
+ * A product's modular view. Where every factor offers integers or a reciprocal (a theta
+ * block), the product is first tried as exact integers: it is then its own majorant.
+ */
+function productView(factors: readonly SeriesSource[], v: Rational): ModularView {
+  const vf = factors.map((f) => ({ view: modularOf(f), valuation: f.valuation, count: 1 }));
+  const ints = integerProductPossible(vf) ? lastOrder((X: Rational) => (rcmp(X, v) < 0 ? null : productIntegers(vf, v, X))) : undefined;
+  return {
+    majorant(X, h) {
+      if (rcmp(X, v) < 0) return zeroMajorant(h);
+      const g = ints?.(X);
+      if (g) return majorantOfIntegers(g, X, h);
+      return majorantProduct(
+        vf.map((f) => ({ majorant: f.view.majorant(radd(X, rsub(f.valuation, v)), h), valuation: f.valuation })),
+        X,
+      );
     },
+    residues(X, primes) {
+      if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
+      const g = ints?.(X);
+      if (g) return residuesOfIntegers(g, primes);
+      let acc: ResidueSeries | null = null;
+      let rest = v;
+      for (const f of vf) {
+        const part = f.view.residues(radd(X, rsub(f.valuation, v)), primes);
+        rest = rsub(rest, f.valuation);
+        // the partial product is needed to X − (valuation of the factors still to come)
+        acc = acc === null ? part : multiplyResidues(acc, part, rsub(X, rest));
+      }
+      return acc!;
+    },
+    ...(ints ? { integers: ints, leaves: vf } : {}),
   };
 }
 
@@ -123,16 +141,29 @@ function modularPower(base: SeriesSource, k: number, v: Rational): { modular?: M
   if (own !== undefined) return { modular: own };
   if (k < 1) return {};
   const need = (X: Rational): Rational => rsub(X, rmul(base.valuation, rat(k - 1)));
+  const view = modularOf(base);
+  const ints = view.integers
+    ? lastOrder((X: Rational) => {
+        if (rcmp(X, v) < 0) return null;
+        const g = view.integers!(need(X));
+        return g === null ? null : powerIntegers(g, k, X);
+      })
+    : undefined;
   return {
     modular: {
       majorant(X, h) {
         if (rcmp(X, v) < 0) return zeroMajorant(h);
-        return majorantPower(modularOf(base).majorant(need(X), h), k, base.valuation, X);
+        const g = ints?.(X);
+        if (g) return majorantOfIntegers(g, X, h);
+        return majorantPower(view.majorant(need(X), h), k, base.valuation, X);
       },
       residues(X, primes) {
         if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
-        return powerResidues(modularOf(base).residues(need(X), primes), k, X);
+        const g = ints?.(X);
+        if (g) return residuesOfIntegers(g, primes);
+        return powerResidues(view.residues(need(X), primes), k, X);
       },
+      ...(ints ? { integers: ints, leaves: [{ view, valuation: base.valuation, count: k }] } : {}),
     },
   };
 }

@@ -11,6 +11,7 @@ import { forEachTerm } from '../slice.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
 import { type Majorant, log2UpperInt, log2LowerInt, up, blockOf, majorantFromLog2, zeroMajorant, withOffset } from './majorant.js';
 import { type ResidueSeries, residuesOfSeries, truncateResidues } from './residue-series.js';
+import { type IntegerGrid, integersOfSeries, truncateIntegers } from './integer-grid.js';
 
 export interface ModularView {
   /** Block bounds (block length h q-steps) of |coefficients| up to q-order X. */
@@ -18,6 +19,28 @@ export interface ModularView {
   residues(X: Rational, primes: readonly NttPrime[]): ResidueSeries;
   /** f^k as a view, where the source knows more about its powers than the rules do. */
   power?(k: number): ModularView | undefined;
+  /**
+   * Its exact coefficients to X as an integer grid (integer-grid.ts), or null when they
+   * are not all integers below EXACT_LIMIT or would cost too much to find out.
+   */
+  integers?(X: Rational): IntegerGrid | null;
+  /**
+   * For a source q^v/(U_1···U_m) with q-only integer series U_i, U_i(0) = 1 (v its
+   * valuation): the U_i to X − v q-steps, u[k] the coefficient of q^k; null if unknown.
+   */
+  reciprocal?(X: Rational): readonly Float64Array[] | null;
+  /**
+   * The source as a product of other views, each to a power (a power or product of
+   * sources with integers): a product of theta blocks multiplies leaf by leaf, sparse
+   * factor by sparse factor, instead of power by power.
+   */
+  readonly leaves?: readonly ViewLeaf[];
+}
+
+export interface ViewLeaf {
+  readonly view: ModularView;
+  readonly valuation: Rational;
+  readonly count: number;
 }
 
 interface Expandable {
@@ -55,14 +78,20 @@ export function exactView(src: Expandable): ModularView {
       const r = residuesOfSeries(expand(X), primes);
       return rcmp(r.exactTo, X) > 0 ? truncateResidues(r, X) : r;
     },
+    integers: (X) => {
+      const g = integersOfSeries(expand(X));
+      return g !== null && rcmp(g.exactTo, X) > 0 ? truncateIntegers(g, X) : g;
+    },
   };
 }
 
-/** Memoises the largest residues computed per prime set, and majorants per order. */
+/** Memoises the largest residues computed per prime set, majorants per order, integers at the last order asked. */
 export function cachedView(v: ModularView): ModularView {
   let best: ResidueSeries | null = null;
   const majorants = new Map<string, Majorant>();
   return {
+    ...(v.integers ? { integers: lastOrder(v.integers.bind(v)) } : {}),
+    ...(v.reciprocal ? { reciprocal: lastOrder(v.reciprocal.bind(v)) } : {}),
     majorant(X, h) {
       const key = `${X.num.toString()}/${X.den.toString()}@${h}`;
       let m = majorants.get(key);
@@ -77,5 +106,18 @@ export function cachedView(v: ModularView): ModularView {
       return rcmp(best.exactTo, X) === 0 ? best : truncateResidues(best, X);
     },
     ...(v.power ? { power: (k: number) => v.power!(k) } : {}),
+  };
+}
+
+/** f memoised at the last q-order it was called with (majorant and residues ask for the same). */
+export function lastOrder<T>(f: (X: Rational) => T): (X: Rational) => T {
+  let at: Rational | null = null;
+  let value: T;
+  return (X) => {
+    if (at === null || rcmp(at, X) !== 0) {
+      value = f(X);
+      at = X;
+    }
+    return value;
   };
 }

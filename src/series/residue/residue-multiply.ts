@@ -21,7 +21,7 @@ import { sliceCountTo } from '../qz-series.js';
 import { nttMultiply, nttForward, nttInverse, pointwiseMultiply, transformLength, NTT_MAX_LENGTH } from '../modular/ntt.js';
 import { mulmod, invmod, reduceDouble } from '../modular/mulmod.js';
 import type { NttPrime } from '../modular/ntt-primes.js';
-import { type ResidueSeries, type ResidueGrid, regridResidues, trimColumns } from './residue-series.js';
+import { type ResidueSeries, type ResidueGrid, type GridShape, regridResidues, trimColumns } from './residue-series.js';
 import { sharedIntegers, maxAbs, sumAbs, sparseDenseIntegers, integersModulo, nonZeroColumns } from './shared-integers.js';
 
 /**
@@ -34,39 +34,42 @@ export const NTT_BUTTERFLY_COST = 3;
 /** Largest |c| of a sparse multiplier kept in doubles: |c|·p < 2^51. */
 const SMALL_MULTIPLIER = 2 ** 21;
 
-interface Aligned {
-  readonly a: ResidueSeries;
-  readonly b: ResidueSeries;
+/** Where a product lives: the factors' common q-denominator and ζ-step, their widths on it, the product's grid. */
+export interface ProductShape {
   readonly qDen: number;
   readonly zStep: number;
+  readonly wa: number;
+  readonly wb: number;
   readonly rows: number;
   readonly width: number;
   readonly start: Rational;
   readonly exactTo: Rational;
 }
 
-function stepOf(r: ResidueSeries): number {
+interface Aligned extends ProductShape {
+  readonly a: ResidueSeries;
+  readonly b: ResidueSeries;
+}
+
+function stepOf(r: GridShape): number {
   return r.width === 1 ? 0 : r.zStep;
 }
 
-function align(a: ResidueSeries, b: ResidueSeries, X: Rational): Aligned {
-  if (a.primes !== b.primes) throw new RangeError('internal: residue series over different primes');
+/** The product's grid to q-order X, or less where a factor is not known far enough. */
+export function productShape(a: GridShape, b: GridShape, X: Rational): ProductShape {
   const qDen = lcmNumber(a.qDen, b.qDen);
   const zStep = gcdNumber(stepOf(a), stepOf(b)) || 1;
   const wa = (a.width - 1) * (stepOf(a) / zStep) + 1;
   const wb = (b.width - 1) * (stepOf(b) / zStep) + 1;
   const start = radd(a.start, b.start);
   const exactTo = rmin(X, rmin(radd(a.exactTo, b.start), radd(b.exactTo, a.start)));
-  return {
-    a: regridResidues(a, qDen, zStep, a.zLo, wa),
-    b: regridResidues(b, qDen, zStep, b.zLo, wb),
-    qDen,
-    zStep,
-    rows: sliceCountTo(start, qDen, exactTo),
-    width: wa + wb - 1,
-    start,
-    exactTo,
-  };
+  return { qDen, zStep, wa, wb, rows: sliceCountTo(start, qDen, exactTo), width: wa + wb - 1, start, exactTo };
+}
+
+function align(a: ResidueSeries, b: ResidueSeries, X: Rational): Aligned {
+  if (a.primes !== b.primes) throw new RangeError('internal: residue series over different primes');
+  const sh = productShape(a, b, X);
+  return { ...sh, a: regridResidues(a, sh.qDen, sh.zStep, a.zLo, sh.wa), b: regridResidues(b, sh.qDen, sh.zStep, b.zLo, sh.wb) };
 }
 
 /**
@@ -77,7 +80,7 @@ function align(a: ResidueSeries, b: ResidueSeries, X: Rational): Aligned {
 const SPARSE_ROW_OVERHEAD = 3;
 
 /** Multiply-adds of the sparse path: each non-zero of s in row i meets the other's rows below rows − i. */
-function sparseWork(s: Int32Array, sw: number, otherRows: number, otherWidth: number, rows: number): number {
+export function sparseWork(s: ArrayLike<number>, sw: number, otherRows: number, otherWidth: number, rows: number): number {
   let work = 0;
   const sRows = Math.min(rows, s.length / sw);
   for (let i = 0; i < sRows; i++) {
@@ -208,6 +211,25 @@ function log2ceil(n: number): number {
 export type ResidueProductRoute = 'sparse-a' | 'sparse-b' | 'column-a' | 'column-b' | 'kronecker' | 'integers-a' | 'integers-b';
 type Route = ResidueProductRoute;
 
+/**
+ * The cheapest transform route for factors of ra and rb rows and widths aw and bw, and
+ * its cost for one prime, in multiply-adds of the sparse path; null when no transform fits.
+ */
+export function transformCost(ra: number, rb: number, aw: number, bw: number, width: number): { route: Route; cost: number } | null {
+  const costs: [Route, number][] = [];
+  // transforms longer than NTT_MAX_LENGTH have no roots of unity modulo the table's primes
+  const nk = 2 ** log2ceil((ra + rb) * width);
+  // longer products are cut into blocks of rows (see kronecker), one transform each
+  if (2 * width <= NTT_MAX_LENGTH) costs.push(['kronecker', NTT_BUTTERFLY_COST * 1.5 * nk * log2ceil(nk) * Math.max(1, nk / NTT_MAX_LENGTH)]);
+  const nc = 2 ** log2ceil(ra + rb);
+  if (nc <= NTT_MAX_LENGTH) {
+    if (bw === 1) costs.push(['column-a', NTT_BUTTERFLY_COST * (aw * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
+    if (aw === 1) costs.push(['column-b', NTT_BUTTERFLY_COST * (bw * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
+  }
+  costs.sort((x, y) => x[1] - y[1]);
+  return costs.length === 0 ? null : { route: costs[0]![0], cost: costs[0]![1] };
+}
+
 function chooseRoute(al: Aligned, ints: IntegerOperands | null): Route {
   const { a, b, rows, width } = al;
   const ra = Math.min(rows, a.rows);
@@ -219,15 +241,8 @@ function chooseRoute(al: Aligned, ints: IntegerOperands | null): Route {
     ['sparse-a', workA],
     ['sparse-b', workB],
   ];
-  // transforms longer than NTT_MAX_LENGTH have no roots of unity modulo the table's primes
-  const nk = 2 ** log2ceil((ra + rb) * width);
-  // longer products are cut into blocks of rows (see kronecker), one transform each
-  if (2 * width <= NTT_MAX_LENGTH) costs.push(['kronecker', NTT_BUTTERFLY_COST * 1.5 * nk * log2ceil(nk) * Math.max(1, nk / NTT_MAX_LENGTH)]);
-  const nc = 2 ** log2ceil(ra + rb);
-  if (nc <= NTT_MAX_LENGTH) {
-    if (b.width === 1) costs.push(['column-a', NTT_BUTTERFLY_COST * (a.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
-    if (a.width === 1) costs.push(['column-b', NTT_BUTTERFLY_COST * (b.width * 2 + 1) * 0.5 * nc * log2ceil(nc)]);
-  }
+  const t = transformCost(ra, rb, a.width, b.width, width);
+  if (t !== null) costs.push([t.route, t.cost]);
   // the routes above run once per prime, the integer routes once for all
   for (const c of costs) c[1] *= a.primes.length;
   if (ints !== null) {

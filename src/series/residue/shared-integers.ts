@@ -29,16 +29,17 @@ export function sharedIntegers(data: readonly Int32Array[], primes: readonly { r
   return out;
 }
 
-export function maxAbs(u: Float64Array): number {
+export function maxAbs(u: ArrayLike<number>): number {
   let m = 0;
   for (let t = 0; t < u.length; t++) m = Math.max(m, Math.abs(u[t]!));
   return m;
 }
 
-export function sumAbs(u: Float64Array): number {
+/** Σ|u| rounded up: each of the n additions errs by at most 2^−53 relative, so (1 + n·2^−52) covers them all. */
+export function sumAbs(u: ArrayLike<number>): number {
   let s = 0;
   for (let t = 0; t < u.length; t++) s += Math.abs(u[t]!);
-  return s;
+  return s * (1 + u.length * 2 ** -52);
 }
 
 /** Per row of a rows × width grid, the columns [lo, hi) outside which it is zero. */
