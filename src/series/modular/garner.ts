@@ -7,14 +7,14 @@
  * (p_i − 1)/2 and the sign is read off the digits from the top; a negative x is
  * assembled as −(M − x), whose digits are those of M − 1 − x (p_i − 1 − v_i) plus one.
  */
-import { JSBI, type Int, int, ZERO } from '../integer.js';
+import { type Int, int, ZERO } from '../integer.js';
+import { LIMB, intFromLimbs, mulAddLimbs } from '../integer-limbs.js';
 import { mulmod, invmod } from './mulmod.js';
 import type { NttPrime } from './ntt-primes.js';
 
 interface GarnerTables {
   /** inv[i][j] = p_i⁻¹ mod p_j for i < j. */
   readonly inv: readonly (readonly number[])[];
-  readonly big: readonly Int[];
 }
 
 const tables = new WeakMap<readonly NttPrime[], GarnerTables>();
@@ -24,7 +24,6 @@ function tablesFor(primes: readonly NttPrime[]): GarnerTables {
   if (t === undefined) {
     t = {
       inv: primes.map((pi, i) => primes.map((pj, j) => (j > i ? invmod(pi.p % pj.p, pj.p) : 0))),
-      big: primes.map((pr) => int(pr.p)),
     };
     tables.set(primes, t);
   }
@@ -40,22 +39,31 @@ function aboveHalf(v: readonly number[], primes: readonly NttPrime[]): boolean {
   return false;
 }
 
-/** Σ v_j·Π_{i<j} p_i, Horner from the top; in doubles while exact (below 2^53), then in JSBI. */
-function assemble(v: readonly number[], primes: readonly NttPrime[], big: readonly Int[]): Int {
+/**
+ * ±Σ v_j·Π_{i<j} p_i, Horner from the top: in doubles while exact (below 2^53), then in
+ * 30-bit limbs (integer-limbs.ts), one JSBI built at the end.
+ */
+function assemble(v: readonly number[], primes: readonly NttPrime[], limbs: Float64Array, negative: boolean): Int {
   let j = v.length - 1;
   while (j > 0 && v[j] === 0) j--;
   let small = v[j]!;
   for (j--; j >= 0 && small <= (2 ** 53 - primes[j]!.p) / primes[j]!.p; j--) small = small * primes[j]!.p + v[j]!;
-  let acc = int(small);
-  for (; j >= 0; j--) acc = JSBI.add(JSBI.multiply(acc, big[j]!), int(v[j]!));
-  return acc;
+  if (j < 0) return int(negative ? -small : small);
+  const top = Math.floor(small / LIMB);
+  limbs[0] = small - top * LIMB;
+  limbs[1] = top;
+  let len = 2;
+  for (; j >= 0; j--) len = mulAddLimbs(limbs, len, primes[j]!.p, v[j]!);
+  return intFromLimbs(limbs, len, negative);
 }
 
 export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], len: number): Int[] {
   const k = primes.length;
-  const { inv, big } = tablesFor(primes);
+  const { inv } = tablesFor(primes);
   const out: Int[] = new Array<Int>(len);
   const v = new Array<number>(k);
+  // k digits below 2^30 fit k + 1 limbs of 30 bits
+  const limbs = new Float64Array(k + 2);
   for (let n = 0; n < len; n++) {
     let zero = true;
     for (let j = 0; j < k; j++) {
@@ -75,7 +83,7 @@ export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], l
       continue;
     }
     if (!aboveHalf(v, primes)) {
-      out[n] = assemble(v, primes, big);
+      out[n] = assemble(v, primes, limbs, false);
       continue;
     }
     // M − x = (M − 1 − x) + 1: complement the digits, then add one with carries
@@ -89,7 +97,7 @@ export function garner(rs: readonly Int32Array[], primes: readonly NttPrime[], l
       }
       v[j] = d;
     }
-    out[n] = JSBI.unaryMinus(assemble(v, primes, big));
+    out[n] = assemble(v, primes, limbs, true);
   }
   return out;
 }
