@@ -18,3 +18,4 @@ export * from './integer-grid.js';
 export * from './integer-multiply.js';
 export * from './integer-divide.js';
 export * from './integer-product.js';
+export * from './residue-power-evaluated.js';

@@ -24,6 +24,7 @@ import {
   powerMillerResidues,
   powerSquaringResidues,
   powerTransformResidues,
+  powerEvaluatedResidues,
   powerRepeatedResidues,
   millerApplies,
   nttPrimes,
@@ -133,7 +134,7 @@ describe('squaring, transform and dispatcher routes', () => {
       fc.property(base, fc.integer({ min: 1, max: 5 }), orderArb, primeSetArb(), (f, k, o, anyPrimes) => {
         const X = orderFor(f, k, o);
         const routes: Route[] = [powerSquaringResidues];
-        if (k >= 2) routes.push(powerTransformResidues, powerRepeatedResidues, powerResidues);
+        if (k >= 2) routes.push(powerTransformResidues, powerRepeatedResidues, powerEvaluatedResidues, powerResidues);
         checkPower(f, k, X, anyPrimes, routes);
       }),
       { seed: SEED, numRuns: 100 },
@@ -143,7 +144,7 @@ describe('squaring, transform and dispatcher routes', () => {
     const base = seriesArb({ maxRows: 10, width: 0, bits: [1, 8, 30], oneColumn: -2 });
     fc.assert(
       fc.property(base, fc.integer({ min: 2, max: 7 }), orderArb, primeSetArb(), (f, k, o, anyPrimes) => {
-        checkPower(f, k, orderFor(f, k, o), anyPrimes, [powerSquaringResidues, powerTransformResidues, powerRepeatedResidues, powerResidues]);
+        checkPower(f, k, orderFor(f, k, o), anyPrimes, [powerSquaringResidues, powerTransformResidues, powerRepeatedResidues, powerEvaluatedResidues, powerResidues]);
       }),
       { seed: SEED, numRuns: 60 },
     );
@@ -154,6 +155,40 @@ describe('squaring, transform and dispatcher routes', () => {
     const p = powerResidues(r, 1, rat(9, 8));
     expect(p.rows).toBe(2);
     expect(residueTerms(p)).toEqual(residueTerms(residuesOfSeries(truncateSeries(f, rat(9, 8)), r.primes)));
+  });
+});
+
+describe('powers by evaluation in ζ', () => {
+  // (ζ − 2 + ζ⁻¹) vanishes at ζ = 1: that point's q-series starts a row later, another
+  // point's (a row of zeros first) later still
+  const phiLike = makeSeries(
+    rat(0),
+    1,
+    int(1),
+    [
+      { lo: -2, c: [int(1), int(0), int(-2), int(0), int(1)] },
+      { lo: -4, c: [int(-2), int(0), int(8), int(0), int(-12), int(0), int(8), int(0), int(-2)] },
+      { lo: -4, c: [int(1), int(0), int(0), int(0), int(3)] },
+      { lo: 0, c: [int(5)] },
+    ],
+    rat(3),
+  );
+  const lateStart = makeSeries(rat(-1, 2), 2, int(1), [{ lo: 0, c: [] }, { lo: 0, c: [] }, { lo: -1, c: [int(1), int(1)] }, { lo: -3, c: [int(7), int(0), int(0), int(0), int(0), int(0), int(-1)] }], rat(1));
+  it('bases whose lowest row vanishes at some roots of unity, k = 2…7: the exact power', () => {
+    for (const f of [phiLike, lateStart]) {
+      for (let k = 2; k <= 7; k++) {
+        checkPower(f, k, radd(rmul(f.start, rat(k)), rat(3)), nttPrimes().slice(2, 5), [powerEvaluatedResidues, powerTransformResidues]);
+      }
+    }
+  });
+  it('wide bases with dozens of rows (the route the dispatcher takes for high powers of weak forms)', () => {
+    const base = seriesArb({ maxRows: 30, width: 12, bits: [1, 6], dens: [1] });
+    fc.assert(
+      fc.property(base, fc.integer({ min: 2, max: 8 }), primeSetArb(), (f, k, anyPrimes) => {
+        checkPower(f, k, radd(rmul(f.start, rat(k)), rat(12)), anyPrimes, [powerEvaluatedResidues, powerResidues]);
+      }),
+      { seed: SEED, numRuns: 25 },
+    );
   });
 });
 
