@@ -7,8 +7,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { JSBI, type Int, polyMulSchoolbook } from '../../src/series/index.js';
 import { polyMulMultiModular, primesFor, bitLength } from '../../src/series/modular/multi-modular-product.js';
-import { mulmod, invmod } from '../../src/series/modular/mulmod.js';
-import { mulw, twiddleQuotient } from '../../src/series/modular/ntt.js';
+import { mulmod, invmod, mulShoup, shoupQuotient } from '../../src/series/modular/mulmod.js';
 import { nttPrimes } from '../../src/series/modular/ntt-primes.js';
 
 const SEED = 61;
@@ -31,7 +30,7 @@ describe('word-size modular arithmetic', () => {
   });
 });
 
-describe('the transform\'s twiddle product (floating-point quotient rounded down)', () => {
+describe('Shoup\'s multiplication with a floating-point quotient rounded down', () => {
   const exact = (a: number, b: number, p: number): number => Number((BigIntOf(a) * BigIntOf(b)) % BigIntOf(p));
   it('agrees with exact products, random and at the edges: x·w ≡ p − 1, 0, 1 and x, w near p', () => {
     const primes = nttPrimes();
@@ -39,11 +38,11 @@ describe('the transform\'s twiddle product (floating-point quotient rounded down
       fc.property(fc.integer({ min: 0, max: primes.length - 1 }), fc.integer({ min: 1, max: 2 ** 30 }), fc.nat(), (i, y, z) => {
         const p = primes[i]!.p;
         const w = 1 + (y % (p - 1));
-        const wq = twiddleQuotient(w, p);
+        const wq = shoupQuotient(w, p);
         const winv = invmod(w, p);
         // x·w/p just below an integer (remainder p − 1), at one (remainder 0), just above (1)
         const xs = [z % p, 0, p - 1, mulmod(p - 1, winv, p, 1 / p), mulmod(1, winv, p, 1 / p), mulmod(p - 2, winv, p, 1 / p)];
-        for (const x of xs) expect(mulw(x, w, wq, p)).toBe(exact(x, w, p));
+        for (const x of xs) expect(mulShoup(x, w, wq, p)).toBe(exact(x, w, p));
       }),
       { seed: SEED, numRuns: 20000 },
     );
@@ -52,11 +51,11 @@ describe('the transform\'s twiddle product (floating-point quotient rounded down
     const primes = nttPrimes();
     for (const { p } of [primes[0]!, primes[primes.length - 1]!]) {
       for (const w of [2, p - 1, (p - 1) / 2, 12345677]) {
-        const wq = twiddleQuotient(w, p);
+        const wq = shoupQuotient(w, p);
         const winv = invmod(w, p);
         for (let r = 1; r <= 200; r++) {
           const x = mulmod(p - r, winv, p, 1 / p);
-          expect(mulw(x, w, wq, p)).toBe(p - r);
+          expect(mulShoup(x, w, wq, p)).toBe(p - r);
         }
       }
     }

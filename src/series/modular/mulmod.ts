@@ -49,3 +49,23 @@ export function inverseTable(n: number, p: number): Int32Array {
 export function invmod(a: number, p: number): number {
   return powmod(a, p - 2, p);
 }
+
+/**
+ * Shoup's multiplication by a fixed w with a precomputed quotient, in doubles: wq = w/p
+ * rounded down by 2^−40 relative (shoupQuotient). For x < p < 2^30 the double x·wq lies
+ * in (t − 2^−9, t), t = x·w/p — three roundings of 2^−53 each cannot undo a lowering of
+ * 2^−40 — so q = ⌊x·wq⌋ is ⌊t⌋ or ⌊t⌋ − 1, x·w − q·p lies in [0, 2p), and one
+ * correction finishes: one multiplication where mulmod takes two.
+ */
+const SHOUP_DOWN = 1 - 2 ** -40;
+
+export function shoupQuotient(w: number, p: number): number {
+  return (w / p) * SHOUP_DOWN;
+}
+
+/** x·w mod p for residues x, w (x < p) and wq = shoupQuotient(w, p). */
+export function mulShoup(x: number, w: number, wq: number, p: number): number {
+  const q = (x * wq) | 0;
+  const r = ((Math.imul(x, w) - Math.imul(q, p)) | 0) - p;
+  return r + ((r >> 31) & p);
+}

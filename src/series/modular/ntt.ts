@@ -6,12 +6,12 @@
  * (bit-reversed in, natural out), so a product never permutes (Chu & George, *Inside
  * the FFT black box*, 2000, ch. 4–5). Twiddles are stored stage by stage, contiguous
  * (entry half + k is ω_{2·half}^k), each with its quotient w/p in a double, rounded
- * down, so that ⌊x·w/p⌋ costs one multiplication and is never over (SHOUP_DOWN); the
+ * down, so that ⌊x·w/p⌋ costs one multiplication and is never over (mulShoup, mulmod.ts); the
  * remainder is taken in 32-bit wrapping arithmetic (mulmod.ts) with branch-free
  * corrections (`(v >> 31) & p` adds p exactly when v is negative). Hot loops use only
  * numbers and typed arrays (ARCHITECTURE.md).
  */
-import { mulmod, powmod, invmod } from './mulmod.js';
+import { mulmod, powmod, invmod, mulShoup, shoupQuotient } from './mulmod.js';
 import { type NttPrime, NTT_MAX_LOG } from './ntt-primes.js';
 
 interface Twiddles {
@@ -36,7 +36,7 @@ function twiddles(prime: NttPrime, n: number, inverse: boolean): Twiddles {
       let x = 1;
       for (let k = 0; k < half; k++) {
         w[half + k] = x;
-        wq[half + k] = twiddleQuotient(x, p);
+        wq[half + k] = shoupQuotient(x, p);
         x = mulmod(x, root, p, pinv);
       }
     }
@@ -48,25 +48,6 @@ function twiddles(prime: NttPrime, n: number, inverse: boolean): Twiddles {
 
 /** The longest transform: every table prime is c·2^NTT_MAX_LOG + 1, so longer roots of unity need not exist. */
 export const NTT_MAX_LENGTH = 2 ** NTT_MAX_LOG;
-
-/**
- * The twiddle quotients w/p are stored rounded down by 2^−40 relative: for x < p < 2^30
- * the double x·wq then lies in (t − 2^−9, t), t = x·w/p (three roundings of 2^−53 each
- * cannot undo a lowering of 2^−40), so q = ⌊x·wq⌋ is ⌊t⌋ or ⌊t⌋ − 1 and x·w − q·p lies
- * in [0, 2p) — one correction (Shoup's method with a floating-point quotient).
- */
-const SHOUP_DOWN = 1 - 2 ** -40;
-
-export function twiddleQuotient(w: number, p: number): number {
-  return (w / p) * SHOUP_DOWN;
-}
-
-/** x·w mod p for a residue x and a twiddle w with its quotient wq = twiddleQuotient(w, p). */
-export function mulw(x: number, w: number, wq: number, p: number): number {
-  const q = (x * wq) | 0;
-  const r = ((Math.imul(x, w) - Math.imul(q, p)) | 0) - p;
-  return r + ((r >> 31) & p);
-}
 
 function addp(x: number, y: number, p: number): number {
   const s = x + y - p;
@@ -94,7 +75,7 @@ export function nttForward(a: Int32Array, prime: NttPrime): void {
       const u = a[k]!;
       const v = a[k + half]!;
       a[k] = addp(u, v, p);
-      a[k + half] = mulw(subp(u, v, p), w[half + k]!, wq[half + k]!, p);
+      a[k + half] = mulShoup(subp(u, v, p), w[half + k]!, wq[half + k]!, p);
     }
     half >>= 1;
   }
@@ -108,15 +89,15 @@ export function nttForward(a: Int32Array, prime: NttPrime): void {
         const x2 = a[i0 + 2 * q]!;
         const x3 = a[i0 + 3 * q]!;
         const y0 = addp(x0, x2, p);
-        const y2 = mulw(subp(x0, x2, p), w[half + k]!, wq[half + k]!, p);
+        const y2 = mulShoup(subp(x0, x2, p), w[half + k]!, wq[half + k]!, p);
         const y1 = addp(x1, x3, p);
-        const y3 = mulw(subp(x1, x3, p), w[half + k + q]!, wq[half + k + q]!, p);
+        const y3 = mulShoup(subp(x1, x3, p), w[half + k + q]!, wq[half + k + q]!, p);
         const wk = w[q + k]!;
         const wkq = wq[q + k]!;
         a[i0] = addp(y0, y1, p);
-        a[i0 + q] = mulw(subp(y0, y1, p), wk, wkq, p);
+        a[i0 + q] = mulShoup(subp(y0, y1, p), wk, wkq, p);
         a[i0 + 2 * q] = addp(y2, y3, p);
-        a[i0 + 3 * q] = mulw(subp(y2, y3, p), wk, wkq, p);
+        a[i0 + 3 * q] = mulShoup(subp(y2, y3, p), wk, wkq, p);
       }
     }
   }
@@ -138,14 +119,14 @@ export function nttInverse(a: Int32Array, prime: NttPrime, unscaled = false): vo
         const i0 = i + k;
         const x0 = a[i0]!;
         const x2 = a[i0 + 2 * q]!;
-        const t1 = mulw(a[i0 + q]!, w[q + k]!, wq[q + k]!, p);
-        const t3 = mulw(a[i0 + 3 * q]!, w[q + k]!, wq[q + k]!, p);
+        const t1 = mulShoup(a[i0 + q]!, w[q + k]!, wq[q + k]!, p);
+        const t3 = mulShoup(a[i0 + 3 * q]!, w[q + k]!, wq[q + k]!, p);
         const y0 = addp(x0, t1, p);
         const y1 = subp(x0, t1, p);
         const y2 = addp(x2, t3, p);
         const y3 = subp(x2, t3, p);
-        const t2 = mulw(y2, w[2 * q + k]!, wq[2 * q + k]!, p);
-        const t4 = mulw(y3, w[3 * q + k]!, wq[3 * q + k]!, p);
+        const t2 = mulShoup(y2, w[2 * q + k]!, wq[2 * q + k]!, p);
+        const t4 = mulShoup(y3, w[3 * q + k]!, wq[3 * q + k]!, p);
         a[i0] = addp(y0, t2, p);
         a[i0 + 2 * q] = subp(y0, t2, p);
         a[i0 + q] = addp(y1, t4, p);
@@ -157,7 +138,7 @@ export function nttInverse(a: Int32Array, prime: NttPrime, unscaled = false): vo
     // one radix-2 stage left (log₂n odd): half = q = n/2
     for (let k = 0; k < q; k++) {
       const u = a[k]!;
-      const v = mulw(a[k + q]!, w[q + k]!, wq[q + k]!, p);
+      const v = mulShoup(a[k + q]!, w[q + k]!, wq[q + k]!, p);
       a[k] = addp(u, v, p);
       a[k + q] = subp(u, v, p);
     }
