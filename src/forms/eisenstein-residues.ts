@@ -18,6 +18,7 @@ import {
   cachedView,
   powmod,
   mulmod,
+  reduceDouble,
   rationalResidue,
   log2UpperRational,
   up,
@@ -27,10 +28,19 @@ import {
 } from '../series/index.js';
 import { eisensteinConstant } from './eisenstein.js';
 
+/**
+ * σ_s(n) mod p for n < rows, as doubles in [0, d(n)·p). Each d^s mod p is built by s
+ * steps x ← x·d mod p in exact doubles (x < 2^30, d < 2^23), cheaper than a modular
+ * power for the small s of Eisenstein series.
+ */
 function sigmaResidues(s: number, rows: number, p: number): Float64Array {
   const acc = new Float64Array(rows);
+  const pinv = 1 / p;
+  const exact = rows < 2 ** 23;
   for (let d = 1; d < rows; d++) {
-    const x = powmod(d, s, p);
+    let x = 1;
+    if (exact) for (let i = 0; i < s; i++) x = reduceDouble(x * d, p, pinv);
+    else x = powmod(d, s, p);
     for (let m = d; m < rows; m += d) acc[m] += x;
   }
   return acc;
@@ -44,7 +54,7 @@ function eisensteinResidues(k: number, rows: number, primes: readonly NttPrime[]
     const a = new Int32Array(rows);
     const pinv = 1 / p;
     if (rows > 0) a[0] = 1;
-    for (let n = 1; n < rows; n++) a[n] = mulmod(cr, sig[n]! % p, p, pinv);
+    for (let n = 1; n < rows; n++) a[n] = mulmod(cr, reduceDouble(sig[n]!, p, pinv), p, pinv);
     return a;
   });
   return { primes, start: rat(0), qDen: 1, rows, exactTo: X, zLo: 0, zStep: 1, width: 1, data };

@@ -13,7 +13,7 @@ export * from './modular-view.js';
 export * from './prime-choice.js';
 export { garner } from '../modular/garner.js';
 export { nttPrimes, type NttPrime } from '../modular/ntt-primes.js';
-export { mulmod, powmod, invmod } from '../modular/mulmod.js';
+export { mulmod, powmod, invmod, reduceDouble } from '../modular/mulmod.js';
 export * from './integer-grid.js';
 export * from './integer-multiply.js';
 export * from './integer-divide.js';
