@@ -6,7 +6,6 @@
  * (θ-products over η^a, U = Π(1 − qⁿ)^a): the quotient is small where 1/U is not.
  */
 import { type IntegerGrid, EXACT_LIMIT } from './integer-grid.js';
-import { maxAbs, nonZeroColumns } from './shared-integers.js';
 
 /** T/U on T's grid; u[k] is U's coefficient of q^k. Null if a partial sum could reach the limit. */
 export function divideByUnit(t: IntegerGrid, u: Float64Array): IntegerGrid | null {
@@ -14,34 +13,49 @@ export function divideByUnit(t: IntegerGrid, u: Float64Array): IntegerGrid | nul
   if (u0 !== 1 && u0 !== -1) throw new RangeError('internal: division by a q-series that is not a unit');
   const { rows, width, qDen } = t;
   if ((u.length - 1) * qDen < rows - 1) throw new RangeError('internal: a unit known to fewer q-steps than its quotient');
-  const shifts: number[] = [];
-  const coefficients: number[] = [];
+  const shiftList: number[] = [];
+  const coefficientList: number[] = [];
   for (let k = 1; k < u.length && k * qDen < rows; k++) {
     if (u[k] === 0) continue;
-    shifts.push(k * qDen);
-    coefficients.push(u[k]!);
+    shiftList.push(k * qDen);
+    coefficientList.push(u[k]!);
   }
+  const shifts = Int32Array.from(shiftList);
+  const coefficients = Float64Array.from(coefficientList);
+  const terms = shifts.length;
   const w = Float64Array.from(t.data.subarray(0, rows * width));
   const rowMax = new Float64Array(rows);
   const lo = new Int32Array(rows);
   const hi = new Int32Array(rows);
   for (let n = 0; n < rows; n++) {
     const at = n * width;
-    let bound = maxAbs(w.subarray(at, at + width));
-    for (let i = 0; i < shifts.length && shifts[i]! <= n; i++) bound += Math.abs(coefficients[i]!) * rowMax[n - shifts[i]!]!;
+    let bound = 0;
+    for (let k = 0; k < width; k++) bound = Math.max(bound, Math.abs(w[at + k]!));
+    let live = 0;
+    while (live < terms && shifts[live]! <= n) live++;
+    for (let i = 0; i < live; i++) bound += Math.abs(coefficients[i]!) * rowMax[n - shifts[i]!]!;
     if (bound >= EXACT_LIMIT) return null;
-    for (let i = 0; i < shifts.length && shifts[i]! <= n; i++) {
-      const from = (n - shifts[i]!) * width;
+    for (let i = 0; i < live; i++) {
+      const src = n - shifts[i]!;
+      const from = src * width - at;
       const c = coefficients[i]!;
-      const k1 = hi[n - shifts[i]!]!;
-      for (let k = lo[n - shifts[i]!]!; k < k1; k++) w[at + k] -= c * w[from + k]!;
+      const k1 = at + hi[src]!;
+      for (let k = at + lo[src]!; k < k1; k++) w[k] -= c * w[k + from]!;
     }
-    if (u0 === -1) for (let k = 0; k < width; k++) w[at + k] = -w[at + k]!;
-    const row = w.subarray(at, at + width);
-    rowMax[n] = maxAbs(row);
-    const span = nonZeroColumns(row, 1, width);
-    lo[n] = span.lo[0]!;
-    hi[n] = span.hi[0]!;
+    let max = 0;
+    let first = width;
+    let last = 0;
+    for (let k = 0; k < width; k++) {
+      let x = w[at + k]!;
+      if (u0 === -1) w[at + k] = x = -x;
+      if (x === 0) continue;
+      max = Math.max(max, Math.abs(x));
+      if (first === width) first = k;
+      last = k + 1;
+    }
+    rowMax[n] = max;
+    lo[n] = first === width ? 0 : first;
+    hi[n] = last;
   }
   return { ...t, data: w };
 }

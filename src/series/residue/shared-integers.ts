@@ -72,10 +72,12 @@ export function sparseDenseIntegers(s: Float64Array, sw: number, d: Float64Array
       const c = s[i * sw + j]!;
       if (c === 0) continue;
       for (let r = 0; r < rowsLeft; r++) {
-        const base = (i + r) * W + j;
-        const drow = r * dw;
-        const k1 = hi[r]!;
-        for (let k = lo[r]!; k < k1; k++) acc[base + k] += c * d[drow + k]!;
+        const off = r * dw - (i + r) * W - j;
+        const k1 = (i + r) * W + j + hi[r]!;
+        let k = (i + r) * W + j + lo[r]!;
+        if (c === 1) for (; k < k1; k++) acc[k] += d[k + off]!;
+        else if (c === -1) for (; k < k1; k++) acc[k] -= d[k + off]!;
+        else for (; k < k1; k++) acc[k] += c * d[k + off]!;
       }
     }
   }
