@@ -2,7 +2,8 @@
  * Runs the parser on one statement's tokens (or one command-line expression), ending
  * them with the synthetic Newline that the grammar expects at the end of a statement.
  */
-import { createTokenInstance, type IToken } from 'chevrotain';
+import type { IToken } from 'chevrotain';
+import { createTokenInstance } from './chevrotain-runtime.js';
 import type * as Cst from './cst-types.js';
 import { codes } from './diagnostic-codes.js';
 import { diagnostic, type Diagnostic } from './diagnostic.js';

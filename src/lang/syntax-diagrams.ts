@@ -3,7 +3,7 @@
  * generator links its scripts and stylesheet from a CDN, which fails offline, so the
  * links are replaced by the files themselves, read from the installed package.
  */
-import { createSyntaxDiagramsCode } from 'chevrotain';
+import { createSyntaxDiagramsCode } from './chevrotain-runtime.js';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';

@@ -5,7 +5,8 @@
  * statement yields one syntax diagnostic; every statement is parsed, so every broken
  * statement in a file is reported.
  */
-import { tokenMatcher, type IRecognitionException, type IToken, type TokenType } from 'chevrotain';
+import type { IRecognitionException, IToken, TokenType } from 'chevrotain';
+import { tokenMatcher } from './chevrotain-runtime.js';
 import { codes } from './diagnostic-codes.js';
 import { diagnostic, type Diagnostic } from './diagnostic.js';
 import { decodeProblem, type ParseProblem } from './parse-problems.js';
