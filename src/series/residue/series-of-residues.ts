@@ -4,7 +4,7 @@
  * D·c by CRT in (−M/2, M/2]; dividing by D gives c. The caller guarantees M > 2H;
  * nothing here can check it.
  */
-import { type Int, ZERO, isZero } from '../integer.js';
+import { JSBI, type Int, ZERO, ONE, isZero } from '../integer.js';
 import { type QZSeries, makeSeries } from '../qz-series.js';
 import { type Slice, EMPTY_SLICE } from '../slice.js';
 import { garner } from '../modular/garner.js';
@@ -12,7 +12,8 @@ import { mulmod } from '../modular/mulmod.js';
 import { type ResidueSeries, residueOf } from './residue-series.js';
 
 /** The residues of D·c, one array per prime. */
-function scaledResidues(r: ResidueSeries, den: Int): Int32Array[] {
+function scaledResidues(r: ResidueSeries, den: Int): readonly Int32Array[] {
+  if (JSBI.equal(den, ONE)) return r.data;
   return r.data.map((a, i) => {
     const { p } = r.primes[i]!;
     const d = residueOf(den, p);
