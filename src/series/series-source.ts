@@ -23,8 +23,10 @@ import { integerProductPossible, productIntegers } from './residue/integer-produ
 import { majorantProduct, majorantPower, majorantSum, zeroMajorant } from './residue/majorant.js';
 import { zeroResidues } from './residue/residue-series.js';
 import { multiplyResidues } from './residue/residue-multiply.js';
-import { powerResidues } from './residue/residue-power.js';
-import { combineResidues } from './residue/residue-combine.js';
+import { powerResidues, powerSpectrum } from './residue/residue-power.js';
+import { combineResidues, type WeightedResidues } from './residue/residue-combine.js';
+import { type WeightedSpectrum, sameSpectrumGrid, sumOfSpectra } from './residue/residue-spectrum.js';
+import type { NttPrime } from './modular/ntt-primes.js';
 
 export interface SeriesSource {
   /** A lower bound of the valuation; exact where the source says so. */
@@ -163,6 +165,10 @@ function modularPower(base: SeriesSource, k: number, v: Rational): { modular?: M
         if (g) return residuesOfIntegers(g, primes);
         return powerResidues(view.residues(need(X), primes), k, X);
       },
+      spectrum(X, primes) {
+        if (rcmp(X, v) < 0 || ints?.(X)) return null;
+        return powerSpectrum(view.residues(need(X), primes), k, X);
+      },
       ...(ints ? { integers: ints, leaves: [{ view, valuation: base.valuation, count: k }] } : {}),
     },
   };
@@ -183,13 +189,27 @@ export function sumSource(terms: readonly WeightedSource[]): SeriesSource {
     },
     modular: {
       majorant: (X, h) => majorantSum(terms.map((t) => ({ majorant: modularOf(t.source).majorant(X, h), coefficient: t.coefficient })), h),
-      residues: (X, primes) =>
-        combineResidues(
-          terms.map((t) => ({ series: modularOf(t.source).residues(X, primes), coefficient: t.coefficient })),
-          primes,
-        ),
+      residues: (X, primes) => combineResidues(fuseSpectra(terms, X, primes), primes),
     },
   };
+}
+
+/**
+ * The terms' residues, those of the terms still in the transform domain with one grid
+ * first added there and brought back by a single inverse transform (residue-spectrum.ts).
+ */
+function fuseSpectra(terms: readonly WeightedSource[], X: Rational, primes: readonly NttPrime[]): WeightedResidues[] {
+  const out: WeightedResidues[] = [];
+  const group: WeightedSpectrum[] = [];
+  for (const t of terms) {
+    const view = modularOf(t.source);
+    const s = view.spectrum?.(X, primes) ?? null;
+    if (s === null) out.push({ series: view.residues(X, primes), coefficient: t.coefficient });
+    else if (group.length === 0 || sameSpectrumGrid(group[0]!.spectrum, s)) group.push({ spectrum: s, coefficient: t.coefficient });
+    else out.push({ series: sumOfSpectra([{ spectrum: s, coefficient: rat(1) }]), coefficient: t.coefficient });
+  }
+  if (group.length > 0) out.unshift({ series: sumOfSpectra(group), coefficient: rat(1) });
+  return out;
 }
 
 /** c·f. */

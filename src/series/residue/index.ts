@@ -19,3 +19,4 @@ export * from './integer-multiply.js';
 export * from './integer-divide.js';
 export * from './integer-product.js';
 export * from './residue-power-evaluated.js';
+export * from './residue-spectrum.js';

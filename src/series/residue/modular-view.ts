@@ -12,6 +12,7 @@ import type { NttPrime } from '../modular/ntt-primes.js';
 import { type Majorant, log2UpperInt, log2LowerInt, up, blockOf, majorantFromLog2, zeroMajorant, withOffset } from './majorant.js';
 import { type ResidueSeries, residuesOfSeries, truncateResidues } from './residue-series.js';
 import { type IntegerGrid, integersOfSeries, truncateIntegers } from './integer-grid.js';
+import type { Spectrum } from './residue-spectrum.js';
 
 export interface ModularView {
   /** Block bounds (block length h q-steps) of |coefficients| up to q-order X. */
@@ -35,6 +36,8 @@ export interface ModularView {
    * factor by sparse factor, instead of power by power.
    */
   readonly leaves?: readonly ViewLeaf[];
+  /** Its residues still in the transform domain, where that is its own route (residue-spectrum.ts); else null. */
+  spectrum?(X: Rational, primes: readonly NttPrime[]): Spectrum | null;
 }
 
 export interface ViewLeaf {
@@ -106,6 +109,7 @@ export function cachedView(v: ModularView): ModularView {
       return rcmp(best.exactTo, X) === 0 ? best : truncateResidues(best, X);
     },
     ...(v.power ? { power: (k: number) => v.power!(k) } : {}),
+    ...(v.spectrum ? { spectrum: v.spectrum.bind(v) } : {}),
   };
 }
 

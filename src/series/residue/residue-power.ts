@@ -20,6 +20,7 @@ import { multiplyResidues, NTT_BUTTERFLY_COST } from './residue-multiply.js';
 import { inverseNewtonResidues } from './residue-inverse.js';
 import { sharedTerms, millerFourPrimes } from './miller-four-primes.js';
 import { evaluatedPlan, evaluatedApplies, powerEvaluatedResidues } from './residue-power-evaluated.js';
+import type { Spectrum } from './residue-spectrum.js';
 
 function millerOnePrime(a: Int32Array, k: number, rows: number, p: number): Int32Array {
   const pinv = 1 / p;
@@ -169,6 +170,32 @@ export function powerTransformResidues(f: ResidueSeries, k: number, X: Rational)
  * measurement.
  */
 const MILLER_POINT_TERM_COST = 1.5;
+
+/**
+ * f^k (f q-only, k ≥ 2) left in the transform domain, for a sum to combine before one
+ * inverse (residue-spectrum.ts) — where the transform is f^k's own route anyway (the
+ * transform route, or a single squaring: the same two transforms); else null.
+ * `force` skips the route's check (tests).
+ */
+export function powerSpectrum(f: ResidueSeries, k: number, X: Rational, force = false): Spectrum | null {
+  if (f.width !== 1 || k < 2) return null;
+  const route = force ? 'transform' : choosePowerRoute(f, k, X);
+  if (route !== 'transform' && !(route === 'squaring' && k === 2)) return null;
+  const start = rmul(f.start, rat(k));
+  const exactTo = rmin(X, radd(f.exactTo, rmul(f.start, rat(k - 1))));
+  const rows = sliceCountTo(start, f.qDen, exactTo);
+  const used = Math.min(rows, f.rows);
+  const n = transformLength(k * (used - 1) + 1);
+  if (n > 2 ** NTT_MAX_LOG) return null;
+  const data = f.primes.map((prime, pi) => {
+    const t = new Int32Array(n);
+    t.set(f.data[pi]!.subarray(0, used));
+    nttForward(t, prime);
+    pointwisePower(t, k, 1, prime);
+    return t;
+  });
+  return { primes: f.primes, start, qDen: f.qDen, rows, exactTo, n, data };
+}
 
 function butterflies(n: number): number {
   return NTT_BUTTERFLY_COST * 0.5 * n * Math.log2(n);
