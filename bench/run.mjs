@@ -9,7 +9,10 @@
  * Every selected workload (default: all, see workloads.mjs) runs by each of its routes —
  * the modular back-end (residues, majorants, CRT back to exact JSBI values) and the exact
  * engine — and each run builds fresh sources and expands from scratch:
- *   bestMs   — best of 5 in-process runs (performance.now around the expansion only);
+ *   bestMs   — best of 5 in-process runs (performance.now around the expansion only),
+ *              after untimed warm-up runs of the same workload and route for at least
+ *              WARM_UP_MS (V8 compiles hot code only after it has run a while; the
+ *              reference times are of compiled code, and the cold cost is medianMs);
  *   medianMs — median of 5 child processes `--single`, each timing one cold run itself;
  *   maxRssMB — the largest resident set of those child processes (whole process).
  * Checksums (checksum.mjs) of every run and route must agree, or the bench fails.
@@ -25,6 +28,8 @@ import { seriesChecksum } from './checksum.mjs';
 import { COLLECTIONS, runCollectionOnce } from './collection.mjs';
 
 const RUNS = 5;
+/** Untimed runs of a workload before its timed ones: at least 3, and at least this long in all. */
+const WARM_UP_MS = 500;
 const SELF = fileURLToPath(import.meta.url);
 const RESULTS_MD = new URL('./results.md', import.meta.url);
 const RESULTS_JSON = new URL('./results.json', import.meta.url);
@@ -84,7 +89,13 @@ function sameChecksums(w, a, b, where) {
   }
 }
 
+function warmUp(w, route) {
+  const t0 = performance.now();
+  for (let i = 0; i < 3 || performance.now() - t0 < WARM_UP_MS; i++) runOnce(w, route);
+}
+
 function benchWorkload(w, route, quick) {
+  if (!quick) warmUp(w, route);
   const runs = [];
   for (let i = 0; i < (quick ? 1 : RUNS); i++) {
     runs.push(runOnce(w, route));
@@ -124,7 +135,7 @@ function markdown(results, totalMs) {
     '# Benchmark results',
     '',
     `Node ${process.version}, ${process.platform}/${process.arch}; ${new Date().toISOString()}; whole bench ${(totalMs / 1000).toFixed(1)} s.`,
-    `bestMs: best of ${RUNS} in-process runs; medianMs: median of ${RUNS} child processes (one cold run each).`,
+    `bestMs: best of ${RUNS} in-process runs, after untimed warm-up runs of the same workload (at least 3 and ${WARM_UP_MS} ms); medianMs: median of ${RUNS} child processes, each timing one cold run (its code not yet compiled).`,
     'Checksums are residues mod 2^61 − 1 (bench/checksum.mjs).',
     '',
     'route: `modular` = residues modulo word-size primes under the majorant height bound, then CRT to exact JSBI values (timed); `exact` = the JSBI engine.',
