@@ -3,7 +3,7 @@
  * converter is type-checked against the rules as they are. A test regenerates it and
  * compares (STURMCHECK_ACCEPT=1 rewrites the file).
  */
-import { generateCstDts } from 'chevrotain';
+import { generateCstDts } from './chevrotain-runtime.js';
 import { claimParser } from './parser.js';
 
 const HEADER = `/**

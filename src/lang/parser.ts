@@ -4,7 +4,7 @@
  * statement at a time (`statementLine`), after `layout.ts` has cut the file at
  * statement boundaries; `claimFile` states the whole-file shape for the diagrams.
  */
-import { CstParser } from 'chevrotain';
+import { CstParser } from './chevrotain-runtime.js';
 import { structuredMessages } from './parse-problems.js';
 import {
   Assume,

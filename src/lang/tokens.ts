@@ -3,7 +3,8 @@
  * skipped here: which of them end a statement is decided by `layout.ts` from the token
  * positions, because the rule depends on indentation and on the previous line.
  */
-import { createToken, Lexer, type TokenType } from 'chevrotain';
+import type { TokenType } from 'chevrotain';
+import { createToken, Lexer } from './chevrotain-runtime.js';
 import { GREEK_CLASS } from './names.js';
 
 const NAME_START = `A-Za-z${GREEK_CLASS}`;
