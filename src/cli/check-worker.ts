@@ -1,33 +1,27 @@
 /**
- * A worker thread of `check --jobs N`: checks the claim files it is sent, one at a
- * time, and posts each file's result back with its index, so the parent can print in
- * a deterministic order whatever finishes first.
+ * A worker thread of `check --jobs N`: takes claim files from the shared queue
+ * (check-pool.ts) until it is empty, posting each file's result back with its index,
+ * so the parent can print in a deterministic order whatever finishes first.
  */
 import { parentPort, workerData } from 'node:worker_threads';
-import { checkPath } from './check-path.js';
-import type { ClaimFilePath } from './discover.js';
-import type { CheckOptions } from '../check/index.js';
+import { checkPath, type PathResult } from './check-path.js';
+import { type WorkerMessage, type WorkerSetup, NEXT_FILE } from './check-queue.js';
 
-interface Job {
-  readonly index: number;
-  readonly path: ClaimFilePath;
+const { opts, paths, queue, slot } = workerData as WorkerSetup;
+
+function post(m: WorkerMessage): void {
+  parentPort?.postMessage(m);
 }
 
-const opts = (workerData as { opts: CheckOptions }).opts;
-
-// ask for the first file only once loaded, so the parent keeps files while workers start
-parentPort?.postMessage({ ready: true });
-
-parentPort?.on('message', (job: Job | null) => {
-  if (job === null) {
-    parentPort?.close();
-    return;
-  }
-  let result;
+for (let i = Atomics.add(queue, NEXT_FILE, 1); i < paths.length; i = Atomics.add(queue, NEXT_FILE, 1)) {
+  Atomics.store(queue, slot, i);
+  post({ started: i });
+  let result: PathResult;
   try {
-    result = checkPath(job.path, opts, {});
+    result = checkPath(paths[i]!, opts, {});
   } catch (e) {
-    result = { ok: false as const, problem: `internal error while checking ${job.path.display}: ${e instanceof Error ? e.message : String(e)}` };
+    result = { ok: false, problem: `internal error while checking ${paths[i]!.display}: ${e instanceof Error ? e.message : String(e)}` };
   }
-  parentPort?.postMessage({ index: job.index, result });
-});
+  post({ index: i, result });
+  Atomics.store(queue, slot, -1);
+}

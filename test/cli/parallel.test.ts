@@ -38,6 +38,15 @@ describe('check --jobs', () => {
     const names = (JSON.parse(two.stdout) as { claims: { name: string }[] }).claims.map((c) => c.name);
     expect(names.slice(0, 3)).toEqual(['slow', 'wrong', 'quick 0']);
   });
+  it('gives it with 3 and with 8 workers too (more workers than cores, more than files)', () => {
+    const strip = (s: string): unknown => (JSON.parse(s) as { claims: Record<string, unknown>[] }).claims.map(({ seconds: _s, ...rest }) => rest);
+    const one = strip(run('check', CLAIMS, '--jobs', '1', '--format', 'json').stdout);
+    for (const jobs of ['3', '8']) {
+      const r = run('check', CLAIMS, '--jobs', jobs, '--format', 'json');
+      expect(r.code).toBe(0);
+      expect(strip(r.stdout)).toEqual(one);
+    }
+  });
   it('rejects --jobs 0', () => {
     expect(run('check', CLAIMS, '--jobs', '0').code).toBe(2);
   });
