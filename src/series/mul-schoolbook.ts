@@ -61,6 +61,10 @@ function mulSchoolbookSparse(x: QZSeries, y: QZSeries): QZSeries {
   const { a, b, start, qDen, exactTo, count } = planProduct(x, y);
   const maxAbs = maxAbsExponent(a, count) + maxAbsExponent(b, count);
   const acc: (SparseAccumulator | null)[] = new Array<SparseAccumulator | null>(count).fill(null);
+  // one accumulator packs like any other (same n and maxAbs): each slice is packed once
+  const packer = new SparseAccumulator(a.nvars, maxAbs);
+  const packedA = packer.packs ? a.slices.slice(0, count).map((s) => packer.pack(s)) : [];
+  const packedB = packer.packs ? b.slices.slice(0, count).map((s) => packer.pack(s)) : [];
   for (let i = 0; i < Math.min(a.slices.length, count); i++) {
     const ai = a.slices[i]!;
     if (sliceIsZero(ai)) continue;
@@ -68,6 +72,10 @@ function mulSchoolbookSparse(x: QZSeries, y: QZSeries): QZSeries {
       const bj = b.slices[j]!;
       if (sliceIsZero(bj)) continue;
       const target = (acc[i + j] ??= new SparseAccumulator(a.nvars, maxAbs));
+      if (target.packs) {
+        target.addProducts(packedA[i]!, packedB[j]!);
+        continue;
+      }
       forEachTerm(ai, (ea, va) =>
         forEachTerm(bj, (eb, vb) =>
           target.add(
