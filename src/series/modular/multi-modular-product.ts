@@ -9,7 +9,7 @@
  */
 import { JSBI, type Int, ZERO, int, isZero } from '../integer.js';
 import { garner } from './garner.js';
-import { nttPrimes, NTT_MAX_LOG, type NttPrime } from './ntt-primes.js';
+import { tablePrimes, NTT_MAX_LOG, type NttPrime } from './ntt-primes.js';
 import { nttMultiply } from './ntt.js';
 
 /**
@@ -61,11 +61,10 @@ export function primeCountFor(heightBits: number): number | null {
 
 /** How many primes make M > 2H, or null when more are needed than exist. */
 export function primesFor(heightBits: number): NttPrime[] | null {
-  const all = nttPrimes();
   const chosen: NttPrime[] = [];
   let bits = 0;
   // ⌊log2 p⌋ per prime never over-counts log2 M
-  for (const pr of all) {
+  for (const pr of tablePrimes()) {
     if (bits >= heightBits + 2) break;
     chosen.push(pr);
     bits += Math.floor(Math.log2(pr.p));

@@ -7,7 +7,7 @@
  * product exceeds 2·2^53) and CRT, whichever the operation count says is cheaper.
  */
 import { type Rational, rmul, rat, rsub, rcmp } from '../rational.js';
-import { nttPrimes, type NttPrime } from '../modular/ntt-primes.js';
+import { nttPrime, type NttPrime } from '../modular/ntt-primes.js';
 import { invmod, mulmod } from '../modular/mulmod.js';
 import { regridOf, regridInto } from './residue-series.js';
 import { type IntegerGrid, EXACT_LIMIT, truncateIntegers, trimIntegerColumns, residuesOfIntegers } from './integer-grid.js';
@@ -22,8 +22,7 @@ function regridIntegers(g: IntegerGrid, qDen: number, zStep: number, width: numb
 
 /** Two primes whose product exceeds 2·(2^52 + 2^29): CRT then recovers any integer below EXACT_LIMIT. */
 function twoPrimes(): readonly [NttPrime, NttPrime] {
-  const [p1, p2] = nttPrimes();
-  return [p1!, p2!];
+  return [nttPrime(0)!, nttPrime(1)!];
 }
 
 /**

@@ -4,7 +4,7 @@
  * exceeds 2^(b+1) ≥ 2H — compared exactly, in JSBI.
  */
 import { JSBI, type Int, int, isZero } from '../integer.js';
-import { nttPrimes, type NttPrime } from '../modular/ntt-primes.js';
+import { tablePrimes, type NttPrime } from '../modular/ntt-primes.js';
 
 export interface PrimeChoice {
   readonly primes: readonly NttPrime[];
@@ -16,7 +16,7 @@ export function choosePrimes(heightBits: number, avoid: Int): PrimeChoice | null
   const need = JSBI.exponentiate(int(2), int(heightBits + 1));
   const chosen: NttPrime[] = [];
   let M = int(1);
-  for (const pr of nttPrimes()) {
+  for (const pr of tablePrimes()) {
     if (JSBI.greaterThan(M, need)) break;
     if (isZero(JSBI.remainder(avoid, int(pr.p)))) continue;
     chosen.push(pr);

@@ -16,7 +16,10 @@ import {
   choosePrimes,
   heightBitsOf,
   residueOf,
+  powmod,
 } from '../../../src/series/index.js';
+import { isTablePrime } from '../../../src/series/modular/ntt-primes.js';
+import { isPrime, factorize } from '../../../src/forms/divisor-sums.js';
 import { primeSetArb } from './residue-helpers.js';
 
 const SEED = 1729;
@@ -146,5 +149,26 @@ describe('choosePrimes', () => {
       { seed: SEED, numRuns: 300 },
     );
     expect(heightBitsOf(-Infinity, int(691))).toBe(0);
+  });
+});
+
+describe('the table of NTT primes', () => {
+  it('is every prime c·2^20 + 1 below 2^30, largest first, by trial division (forms/divisor-sums.ts)', () => {
+    const want: number[] = [];
+    for (let c = 1023; c >= 1; c--) if (isPrime(c * 2 ** 20 + 1)) want.push(c * 2 ** 20 + 1);
+    expect(nttPrimes().map((pr) => pr.p)).toEqual(want);
+    // 998244353 = 119·2^23 + 1 is the best-known NTT prime (common practice, no source)
+    expect(want).toContain(998244353);
+  });
+  it('the strong-probable-prime test agrees with trial division on every candidate c·2^20 + 1', () => {
+    for (let c = 1; c < 1024; c++) {
+      const n = c * 2 ** 20 + 1;
+      expect(isTablePrime(n), `n = ${n}`).toBe(isPrime(n));
+    }
+  });
+  it('each has a primitive root: g^((p−1)/f) ≠ 1 for every prime f of p − 1', () => {
+    for (const { p, g } of nttPrimes()) {
+      for (const [f] of factorize(p - 1)) expect(powmod(g, (p - 1) / f, p), `p = ${p}, f = ${f}`).not.toBe(1);
+    }
   });
 });
