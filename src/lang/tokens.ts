@@ -156,4 +156,9 @@ export const LEXER_TOKENS: readonly TokenType[] = [
 /** Every token type the parser knows, including the synthetic Newline. */
 export const PARSER_TOKENS: readonly TokenType[] = [...LEXER_TOKENS, Newline];
 
-export const claimLexer = new Lexer([...LEXER_TOKENS], { positionTracking: 'full', ensureOptimizations: false });
+/** `validate` as for the parser (parser.ts): the tests build the lexer validated. */
+export function makeClaimLexer(validate = false): InstanceType<typeof Lexer> {
+  return new Lexer([...LEXER_TOKENS], { positionTracking: 'full', ensureOptimizations: false, skipValidations: !validate });
+}
+
+export const claimLexer = makeClaimLexer();
