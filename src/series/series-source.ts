@@ -9,7 +9,6 @@
  * Asking for more recomputes from the sources; nothing is ever padded with zeros.
  */
 import { type Rational, radd, rsub, rmul, rmin, rat, rcmp } from './rational.js';
-import type { ResidueSeries } from './residue/residue-series.js';
 import { type QZSeries, truncateSeries, zeroSeries } from './qz-series.js';
 import { multiplySeries } from './multiply.js';
 import { powerSeries } from './power.js';
@@ -19,10 +18,9 @@ import { substituteLinear } from './substitute.js';
 import { type ModularView, exactView, cachedView, lastOrder } from './residue/modular-view.js';
 import { majorantOfIntegers, residuesOfIntegers } from './residue/integer-grid.js';
 import { powerIntegers } from './residue/integer-multiply.js';
-import { integerProductPossible, productIntegers } from './residue/integer-product.js';
-import { majorantProduct, majorantPower, majorantSum, zeroMajorant } from './residue/majorant.js';
+import { productView } from './residue/product-view.js';
+import { majorantPower, majorantSum, zeroMajorant } from './residue/majorant.js';
 import { zeroResidues } from './residue/residue-series.js';
-import { multiplyResidues } from './residue/residue-multiply.js';
 import { powerResidues, powerSpectrum } from './residue/residue-power.js';
 import { combineResidues, type WeightedResidues } from './residue/residue-combine.js';
 import { type WeightedSpectrum, sameSpectrumGrid, sumOfSpectra } from './residue/residue-spectrum.js';
@@ -82,43 +80,16 @@ export function productSource(factors: readonly SeriesSource[]): SeriesSource {
       }
       return truncateSeries(acc!, X);
     },
-    modular: productView(factors, v),
+    modular: productViewOf(factors, v),
   };
 }
 
-/**
- * A product's modular view. Where every factor offers integers or a reciprocal (a theta
- * block), the product is first tried as exact integers: it is then its own majorant.
- */
-function productView(factors: readonly SeriesSource[], v: Rational): ModularView {
-  const vf = factors.map((f) => ({ view: modularOf(f), valuation: f.valuation, count: 1 }));
-  const ints = integerProductPossible(vf) ? lastOrder((X: Rational) => (rcmp(X, v) < 0 ? null : productIntegers(vf, v, X))) : undefined;
-  return {
-    majorant(X, h) {
-      if (rcmp(X, v) < 0) return zeroMajorant(h);
-      const g = ints?.(X);
-      if (g) return majorantOfIntegers(g, X, h);
-      return majorantProduct(
-        vf.map((f) => ({ majorant: f.view.majorant(radd(X, rsub(f.valuation, v)), h), valuation: f.valuation })),
-        X,
-      );
-    },
-    residues(X, primes) {
-      if (rcmp(X, v) < 0) return zeroResidues(primes, v, 1, X);
-      const g = ints?.(X);
-      if (g) return residuesOfIntegers(g, primes);
-      let acc: ResidueSeries | null = null;
-      let rest = v;
-      for (const f of vf) {
-        const part = f.view.residues(radd(X, rsub(f.valuation, v)), primes);
-        rest = rsub(rest, f.valuation);
-        // the partial product is needed to X − (valuation of the factors still to come)
-        acc = acc === null ? part : multiplyResidues(acc, part, rsub(X, rest));
-      }
-      return acc!;
-    },
-    ...(ints ? { integers: ints, leaves: vf } : {}),
-  };
+/** A product's modular view (residue/product-view.ts) over its factors' views. */
+function productViewOf(factors: readonly SeriesSource[], v: Rational): ModularView {
+  return productView(
+    factors.map((f) => ({ view: modularOf(f), valuation: f.valuation, count: 1 })),
+    v,
+  );
 }
 
 export function powerSource(base: SeriesSource, k: number): SeriesSource {

@@ -20,3 +20,5 @@ export * from './integer-divide.js';
 export * from './integer-product.js';
 export * from './residue-power-evaluated.js';
 export * from './residue-spectrum.js';
+export * from './product-view.js';
+export * from './residue-divide.js';

@@ -30,19 +30,33 @@ function span(g: IntegerGrid): number {
 }
 
 /**
- * The product (valuation v) to q-order X as integers, or null. A leaf of valuation w
- * is needed to X − (v − w); a partial product to X − (the valuation still to come).
+ * A product tried as integers: the whole of it when every step stayed exact; else the
+ * product of the leaves with integers when that much did (the reciprocals then multiply
+ * it by the rules, their residues and majorants), else nothing.
  */
-export function productIntegers(factors: readonly ViewLeaf[], v: Rational, X: Rational): IntegerGrid | null {
+export interface IntegerProduct {
+  readonly whole: IntegerGrid | null;
+  /** The leaves with integers multiplied, known to `order` (X − the units' valuation). */
+  readonly plain: { readonly grid: IntegerGrid; readonly valuation: Rational; readonly order: Rational } | null;
+  /** The leaves given as reciprocals, each with its count. */
+  readonly units: readonly ViewLeaf[];
+}
+
+/**
+ * The product (valuation v) to q-order X as integers. A leaf of valuation w is needed
+ * to X − (v − w); a partial product to X − (the valuation still to come).
+ */
+export function productIntegers(factors: readonly ViewLeaf[], v: Rational, X: Rational): IntegerProduct {
   const leaves = flatten(factors);
-  const plain = leaves.filter((f) => f.view.reciprocal === undefined);
+  const plainLeaves = leaves.filter((f) => f.view.reciprocal === undefined);
   const units = leaves.filter((f) => f.view.reciprocal !== undefined);
+  const none: IntegerProduct = { whole: null, plain: null, units };
   let vUnits = rat(0);
   for (const f of units) vUnits = radd(vUnits, rmul(f.valuation, rat(f.count)));
   const grids: { grid: IntegerGrid; valuation: Rational }[] = [];
-  for (const f of plain) {
+  for (const f of plainLeaves) {
     const g = f.view.integers!(radd(X, rsub(f.valuation, v)));
-    if (g === null) return null;
+    if (g === null) return none;
     for (let i = 0; i < f.count; i++) grids.push({ grid: g, valuation: f.valuation });
   }
   grids.sort((a, b) => span(a.grid) - span(b.grid));
@@ -53,20 +67,21 @@ export function productIntegers(factors: readonly ViewLeaf[], v: Rational, X: Ra
   for (const { grid, valuation } of grids) {
     rest = rsub(rest, valuation);
     acc = acc === null ? grid : multiplyIntegers(acc, grid, rsub(XP, rest));
-    if (acc === null) return null;
+    if (acc === null) return none;
   }
+  const plain = { grid: acc!, valuation: rsub(v, vUnits), order: XP };
   let q: IntegerGrid = { ...acc!, start: radd(acc!.start, vUnits), exactTo: radd(acc!.exactTo, vUnits) };
   for (const f of units) {
     // the units are needed as many q-steps as the quotient's grid spans
     const us = f.view.reciprocal!(radd(f.valuation, rsub(q.exactTo, q.start)));
-    if (us === null) return null;
+    if (us === null) return { whole: null, plain, units };
     for (let i = 0; i < f.count; i++) {
       for (const u of us) {
         const next = divideByUnit(q, u);
-        if (next === null) return null;
+        if (next === null) return { whole: null, plain, units };
         q = next;
       }
     }
   }
-  return rcmp(q.exactTo, X) > 0 ? truncateIntegers(q, X) : q;
+  return { whole: rcmp(q.exactTo, X) > 0 ? truncateIntegers(q, X) : q, plain, units };
 }

@@ -31,6 +31,9 @@ import {
   multiplyIntegersBy,
   powerIntegers,
   divideByUnit,
+  divideResiduesByUnit,
+  residuesOfSeries,
+  multiplyResidues,
   productSource,
   powerSource,
   modularOf,
@@ -40,7 +43,7 @@ import {
   sliceExponent,
 } from '../../../src/series/index.js';
 import { thetaSource, etaPowerSource } from '../../../src/forms/leaves.js';
-import { seriesArb, expectSameSeries } from './residue-helpers.js';
+import { seriesArb, expectSameSeries, primeSetArb, residueTerms } from './residue-helpers.js';
 import { expectMajorantBounds } from './expressions.js';
 
 const SEED = 5150;
@@ -172,6 +175,22 @@ describe('integer products against the exact engine', () => {
 });
 
 describe('division by q-only units', () => {
+  it('modulo primes: the residues of the exact quotient, for integral T and sparse units', () => {
+    const unitArb = fc.tuple(fc.constantFrom(1n, -1n), fc.array(fc.bigInt({ min: -9n, max: 9n }), { minLength: 0, maxLength: 12 }));
+    fc.assert(
+      fc.property(seriesArb({ maxRows: 10, width: 4, bits: [1, 20, 40], dens: [1], qDens: [1, 2] }), unitArb, primeSetArb(), (t, [u0, rest], primes) => {
+        const T = grid(t);
+        const coeffs = [u0, ...rest, ...new Array<bigint>(Math.max(0, T.rows + 1 - rest.length)).fill(0n)];
+        const U = makeSeries(rat(0), T.qDen, int(1), coeffs.flatMap((c, k) => [c === 0n ? EMPTY_SLICE : { lo: 0, c: [JSBI.BigInt(c.toString())] }, ...new Array<Slice>(k === coeffs.length - 1 ? 0 : T.qDen - 1).fill(EMPTY_SLICE)]), rat(coeffs.length - 1));
+        const w = divideResiduesByUnit(residuesOfSeries(truncateSeries(t, T.exactTo), primes), Float64Array.from(coeffs, Number));
+        // W·U = T modulo every prime, row by row
+        const back = multiplyResidues(w, residuesOfSeries(U, primes), T.exactTo);
+        expect(residueTerms(back)).toEqual(residueTerms(residuesOfSeries(truncateSeries(t, T.exactTo), primes)));
+      }),
+      { seed: SEED, numRuns: 120 },
+    );
+  });
+
   it('T/U times U gives T back, for random integral T and units U (U(0) = ±1)', () => {
     const unitArb = fc.tuple(fc.constantFrom(1n, -1n), fc.array(fc.bigInt({ min: -3n, max: 3n }), { minLength: 0, maxLength: 12 }));
     fc.assert(
@@ -237,6 +256,39 @@ describe('theta blocks by the integer route', () => {
     expect(r.route.primes.length).toBe(1);
     expect(r.route.heightBits).toBeLessThanOrEqual(12);
     expect(rcmp(sliceExponent(r.series, 0), rat(1))).toBe(0);
+  });
+
+  it('blocks whose quotient passes 2^52: the exact theta part divided by the units modulo each prime', () => {
+    const cases: [readonly (readonly [number, number])[], number, number][] = [
+      [[[1, 2]], -24, 60],
+      [[[1, 1], [3, 1]], -36, 45],
+      [[[2, 3], [5, 1]], -48, 30],
+    ];
+    for (const [thetas, e, steps] of cases) {
+      const src = thetaBlock(thetas, e);
+      const X = radd(src.valuation, rat(steps));
+      expect(modularOf(src).integers!(X), 'the whole quotient is past the limit').toBeNull();
+      const want = truncateSeries(src.expand(X), X);
+      const r = expandModular(src, X)!;
+      expectSameSeries(r.series, want);
+      expectMajorantBounds(want, modularOf(src).majorant(X, 1), X, r.route.heightBits, 'divided block');
+    }
+  });
+
+  it('random blocks over high powers of 1/η, quotient exact or not: the exact engine’s series', () => {
+    const arb = fc.tuple(
+      fc.array(fc.tuple(fc.integer({ min: 1, max: 4 }), fc.integer({ min: 1, max: 2 })), { minLength: 1, maxLength: 3 }),
+      fc.integer({ min: -60, max: -12 }),
+      fc.integer({ min: 5, max: 40 }),
+    );
+    fc.assert(
+      fc.property(arb, ([thetas, e, steps]) => {
+        const src = thetaBlock(thetas, e);
+        const X = radd(src.valuation, rat(steps));
+        expectSameSeries(expandModular(src, X)!.series, truncateSeries(src.expand(X), X));
+      }),
+      { seed: SEED, numRuns: 30 },
+    );
   });
 
   it('η^e for e > 0 as integers: the exact engine’s, refused before any work for η^24 to q^20000', () => {
