@@ -58,7 +58,7 @@ function jobsOption(args: ParsedArgs): number {
 async function checkAll(args: ParsedArgs, io: CliIo, color: boolean): Promise<Run> {
   const discovery = discoverClaimFiles(args.positionals, io.cwd);
   const run: Run = { verdicts: [], sources: new Map(), problems: [...discovery.problems] };
-  const progress = startProgress(io, color);
+  const progress = await startProgress(io, color);
   try {
     const opts = checkOptions(args);
     const results = await checkPaths(discovery.files, opts, jobsOption(args), { claimStarted: progress.claimStarted }, (file) =>
