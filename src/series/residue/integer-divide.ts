@@ -6,22 +6,12 @@
  * (θ-products over η^a, U = Π(1 − qⁿ)^a): the quotient is small where 1/U is not.
  */
 import { type IntegerGrid, EXACT_LIMIT } from './integer-grid.js';
+import { unitTerms } from './unit-terms.js';
 
 /** T/U on T's grid; u[k] is U's coefficient of q^k. Null if a partial sum could reach the limit. */
 export function divideByUnit(t: IntegerGrid, u: Float64Array): IntegerGrid | null {
-  const u0 = u[0];
-  if (u0 !== 1 && u0 !== -1) throw new RangeError('internal: division by a q-series that is not a unit');
   const { rows, width, qDen } = t;
-  if ((u.length - 1) * qDen < rows - 1) throw new RangeError('internal: a unit known to fewer q-steps than its quotient');
-  const shiftList: number[] = [];
-  const coefficientList: number[] = [];
-  for (let k = 1; k < u.length && k * qDen < rows; k++) {
-    if (u[k] === 0) continue;
-    shiftList.push(k * qDen);
-    coefficientList.push(u[k]!);
-  }
-  const shifts = Int32Array.from(shiftList);
-  const coefficients = Float64Array.from(coefficientList);
+  const { u0, shifts, coefficients } = unitTerms(u, qDen, rows);
   const terms = shifts.length;
   const w = Float64Array.from(t.data.subarray(0, rows * width));
   const rowMax = new Float64Array(rows);

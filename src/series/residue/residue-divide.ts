@@ -7,25 +7,15 @@
  */
 import { reduceDouble } from '../modular/mulmod.js';
 import type { ResidueSeries } from './residue-series.js';
+import { unitTerms } from './unit-terms.js';
 
 /**
  * T/U on T's grid; u[k] is U's coefficient of q^k, known as far as T's rows reach. Each
  * row sums |T_n| + Σ|U_k|·W < (1 + Σ|U_k|)·p in doubles: exact while Σ|U_k| < 2^21.
  */
 export function divideResiduesByUnit(t: ResidueSeries, u: Float64Array): ResidueSeries {
-  const u0 = u[0];
-  if (u0 !== 1 && u0 !== -1) throw new RangeError('internal: division by a q-series that is not a unit');
   const { rows, width, qDen } = t;
-  if ((u.length - 1) * qDen < rows - 1) throw new RangeError('internal: a unit known to fewer q-steps than its quotient');
-  const shifts: number[] = [];
-  const coefficients: number[] = [];
-  let total = 0;
-  for (let k = 1; k < u.length && k * qDen < rows; k++) {
-    if (u[k] === 0) continue;
-    shifts.push(k * qDen);
-    coefficients.push(u[k]!);
-    total += Math.abs(u[k]!);
-  }
+  const { u0, shifts, coefficients, total } = unitTerms(u, qDen, rows);
   if (total >= 2 ** 21) throw new RangeError('internal: a unit too large for the residue division');
   const data = t.data.map((a, pi) => {
     const p = t.primes[pi]!.p;
