@@ -151,18 +151,21 @@ function scaleInPlace(a: Int32Array, c: number, p: number): void {
   for (let i = 0; i < a.length; i++) a[i] = mulmod(a[i]!, c, p, pinv);
 }
 
+/** x·y mod p for residues x, y: mulmod.ts's method with branch-free corrections. */
+function mulResidues(x: number, y: number, p: number, pinv: number): number {
+  const q = Math.floor(x * y * pinv);
+  let v = (Math.imul(x, y) - Math.imul(q, p)) | 0;
+  v += (v >> 31) & p;
+  v -= p;
+  return v + ((v >> 31) & p);
+}
+
 /** fa ← fa·fb·c pointwise (c folds in the inverse transform's 1/n). */
 export function pointwiseMultiply(fa: Int32Array, fb: Int32Array, c: number, p: number): void {
   const pinv = 1 / p;
   for (let i = 0; i < fa.length; i++) {
-    const x = fa[i]!;
-    const y = fb[i]!;
-    const q = Math.floor(x * y * pinv);
-    let v = (Math.imul(x, y) - Math.imul(q, p)) | 0;
-    v += (v >> 31) & p;
-    v -= p;
-    v += (v >> 31) & p;
-    fa[i] = c === 1 ? v : mulmod(v, c, p, pinv);
+    const v = mulResidues(fa[i]!, fb[i]!, p, pinv);
+    fa[i] = c === 1 ? v : mulResidues(v, c, p, pinv);
   }
 }
 
@@ -174,22 +177,8 @@ export function pointwisePower(t: Int32Array, k: number, c: number, prime: NttPr
     let base = t[i]!;
     let r = c;
     for (let e = k; e > 0; e >>= 1) {
-      if (e & 1) {
-        const q = Math.floor(r * base * pinv);
-        let v = (Math.imul(r, base) - Math.imul(q, p)) | 0;
-        v += (v >> 31) & p;
-        v -= p;
-        v += (v >> 31) & p;
-        r = v;
-      }
-      if (e > 1) {
-        const q = Math.floor(base * base * pinv);
-        let v = (Math.imul(base, base) - Math.imul(q, p)) | 0;
-        v += (v >> 31) & p;
-        v -= p;
-        v += (v >> 31) & p;
-        base = v;
-      }
+      if (e & 1) r = mulResidues(r, base, p, pinv);
+      if (e > 1) base = mulResidues(base, base, p, pinv);
     }
     t[i] = r;
   }
