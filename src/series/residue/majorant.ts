@@ -19,6 +19,7 @@
 import { JSBI, type Int, ONE, lcm, abs, isZero } from '../integer.js';
 import { type Rational, rfloor, rdiv, rat, rsub, rcmp, radd, rmul } from '../rational.js';
 import { bitLength } from '../modular/multi-modular-product.js';
+import { bySquaring } from './by-squaring.js';
 
 export interface Majorant {
   /** Block length in integral q-steps. */
@@ -180,22 +181,9 @@ export function majorantProduct(parts: readonly FactorMajorant[], X: Rational): 
  */
 export function majorantPower(m: Majorant, k: number, v: Rational, X: Rational): Majorant {
   const lastFor = (j: number): number => blockOf(rsub(X, rmul(v, rat(k - j))), m.h);
-  let result: Majorant | null = null;
-  let have = 0;
-  let base = m;
-  let pow = 1;
-  for (let e = k; e > 0; e >>= 1) {
-    if (e & 1) {
-      have += pow;
-      result = result === null ? base : convolve(result, base, lastFor(have));
-    }
-    if (e > 1) {
-      pow *= 2;
-      base = convolve(base, base, lastFor(pow));
-    }
-  }
+  const result = bySquaring(m, k, (a, b, j) => convolve(a, b, lastFor(j)));
   const last = blockOf(X, m.h);
-  return { ...result!, m: cut(result!.m, result!.first, last) };
+  return { ...result, m: cut(result.m, result.first, last) };
 }
 
 export interface WeightedMajorant {

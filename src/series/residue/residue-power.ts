@@ -21,6 +21,7 @@ import { inverseNewtonResidues } from './residue-inverse.js';
 import { sharedTerms, millerFourPrimes } from './miller-four-primes.js';
 import { evaluatedPlan, evaluatedApplies, powerEvaluatedResidues } from './residue-power-evaluated.js';
 import type { Spectrum } from './residue-spectrum.js';
+import { bySquaring } from './by-squaring.js';
 
 function millerOnePrime(a: Int32Array, k: number, rows: number, p: number): Int32Array {
   const pinv = 1 / p;
@@ -112,25 +113,9 @@ export function powerMillerResidues(f: ResidueSeries, k: number, X: Rational): R
 
 /** f^k, k ≥ 1, to q-order X by repeated squaring. */
 export function powerSquaringResidues(f: ResidueSeries, k: number, X: Rational): ResidueSeries {
-  if (k < 1) throw new RangeError('internal: repeated squaring needs k ≥ 1');
-  // f^j is needed to X − (k − j)·v(f): beyond X when v(f) < 0, since the factors still
-  // to come bring the order down again
+  // f^j is needed to X − (k − j)·v(f) (by-squaring.ts)
   const need = (j: number): Rational => rsub(X, rmul(f.start, rat(k - j)));
-  let result: ResidueSeries | null = null;
-  let have = 0;
-  let base = f;
-  let pow = 1;
-  for (let e = k; e > 0; e >>= 1) {
-    if (e & 1) {
-      have += pow;
-      result = result === null ? base : multiplyResidues(result, base, need(have));
-    }
-    if (e > 1) {
-      pow *= 2;
-      base = multiplyResidues(base, base, need(pow));
-    }
-  }
-  return truncateIfPast(result!, X);
+  return truncateIfPast(bySquaring(f, k, (a, b, j) => multiplyResidues(a, b, need(j))), X);
 }
 
 function truncateIfPast(r: ResidueSeries, X: Rational): ResidueSeries {
